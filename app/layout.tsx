@@ -1,0 +1,28 @@
+import type { Metadata } from "next";
+import localFont from "next/font/local";
+import "./globals.css";
+
+const sans = localFont({
+  src: [
+    { path: "./fonts/inter-latin-400-normal.woff2", weight: "400" },
+    { path: "./fonts/inter-latin-500-normal.woff2", weight: "500" },
+    { path: "./fonts/inter-latin-600-normal.woff2", weight: "600" },
+    { path: "./fonts/inter-latin-700-normal.woff2", weight: "700" },
+  ],
+  variable: "--font-sans",
+  display: "swap",
+});
+const mono = localFont({ src: "./fonts/jetbrains-mono-latin-400-normal.woff2", variable: "--font-mono", display: "swap" });
+
+export const metadata: Metadata = {
+  title: { default: "Rootbench", template: "%s · Rootbench" },
+  description: "Triage, bench records and shared knowledge for drive-unit repair workshops.",
+};
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+      <body>{children}</body>
+    </html>
+  );
+}

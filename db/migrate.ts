@@ -1,0 +1,25 @@
+import { drizzle } from "drizzle-orm/postgres-js";
+import { migrate } from "drizzle-orm/postgres-js/migrator";
+import path from "node:path";
+import postgres from "postgres";
+import { databaseUrl } from "./url";
+
+/** Applies db/migrations over one connection; safe to run on every start. */
+export async function runMigrations(url = databaseUrl()): Promise<void> {
+  const connection = postgres(url, { max: 1, onnotice: () => {} });
+  try {
+    await migrate(drizzle(connection), { migrationsFolder: path.join(__dirname, "migrations") });
+  } finally {
+    await connection.end();
+  }
+}
+
+if (require.main === module) {
+  const started = Date.now();
+  runMigrations()
+    .then(() => console.log(`migrations applied in ${Date.now() - started} ms`))
+    .catch((error: unknown) => {
+      console.error("migration failed:", error instanceof Error ? error.message : error);
+      process.exit(1);
+    });
+}

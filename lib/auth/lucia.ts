@@ -1,0 +1,31 @@
+import "server-only";
+import { DrizzlePostgreSQLAdapter } from "@lucia-auth/adapter-drizzle";
+import { Lucia, TimeSpan } from "lucia";
+import { db } from "@/db";
+import { sessions, users, type Role } from "@/db/schema";
+
+const adapter = new DrizzlePostgreSQLAdapter(db, sessions, users);
+
+export const SESSION_COOKIE = "rb_session";
+
+export const lucia = new Lucia(adapter, {
+  sessionExpiresIn: new TimeSpan(14, "d"),
+  sessionCookie: {
+    name: SESSION_COOKIE,
+    expires: true,
+    attributes: { secure: process.env.COOKIE_SECURE === "1", sameSite: "lax" },
+  },
+  getUserAttributes: (attributes) => ({
+    email: attributes.email,
+    name: attributes.name,
+    role: attributes.role,
+    active: attributes.active,
+  }),
+});
+
+declare module "lucia" {
+  interface Register {
+    Lucia: typeof lucia;
+    DatabaseUserAttributes: { email: string; name: string; role: Role; active: boolean };
+  }
+}

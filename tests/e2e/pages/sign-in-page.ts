@@ -1,0 +1,25 @@
+import type { Page } from "playwright-core";
+import { BASE_URL, DEMO_PASSWORD } from "../support/browser";
+
+export class SignInPage {
+  constructor(private readonly page: Page) {}
+
+  async open(): Promise<void> {
+    await this.page.goto(`${BASE_URL}/sign-in`);
+  }
+
+  async signIn(email: string, password = DEMO_PASSWORD): Promise<void> {
+    await this.page.getByLabel("E-mail address").fill(email);
+    await this.page.getByLabel("Password").fill(password);
+    await this.page.getByRole("button", { name: "Sign in" }).click();
+  }
+
+  message() {
+    return this.page.getByTestId("sign-in-message");
+  }
+
+  async signOut(): Promise<void> {
+    await this.page.getByRole("button", { name: "Sign out" }).click();
+    await this.page.waitForURL(/\/sign-in/);
+  }
+}

@@ -1,0 +1,17 @@
+import { defineConfig } from "vitest/config";
+import path from "node:path";
+
+const root = path.resolve(__dirname, "../..");
+
+export default defineConfig({
+  root,
+  resolve: { alias: { "@": root } },
+  test: {
+    include: ["tests/e2e/**/*.e2e.ts"],
+    environment: "node",
+    pool: "forks",
+    fileParallelism: false,
+    testTimeout: 90000,
+    hookTimeout: 90000,
+  },
+});
