@@ -1,0 +1,11 @@
+import path from "node:path";
+import { loadContent, type Content } from "@/lib/content/catalogue";
+
+export const contentDir = path.resolve(__dirname, "../../../content");
+
+let cached: Content | undefined;
+/** The demo content, parsed once per test file. */
+export function content(): Content {
+  cached ??= loadContent(contentDir);
+  return cached;
+}
