@@ -7,6 +7,6 @@ ensure_node_modules
 bash scripts/db.sh start
 export DB_PORT=${DB_PORT:-54329}
 export DATABASE_URL=${DATABASE_URL:-$(db_url_for app "$DB_PORT" rootbench)}
-npx tsx db/migrate.ts
-npx tsx db/seed/index.ts
+npx tsx --conditions=react-server db/migrate.ts
+npx tsx --conditions=react-server db/seed/index.ts
 exec npx next dev -p "${PORT:-3000}"

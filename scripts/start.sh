@@ -9,8 +9,8 @@ ensure_node_modules
 bash scripts/db.sh start
 export DB_PORT=${DB_PORT:-54329}
 export DATABASE_URL=${DATABASE_URL:-$(db_url_for app "$DB_PORT" rootbench)}
-npx tsx db/migrate.ts
-npx tsx db/seed/index.ts
+npx tsx --conditions=react-server db/migrate.ts
+npx tsx --conditions=react-server db/seed/index.ts
 ensure_build
 
 export PORT=${PORT:-3000}
@@ -21,15 +21,15 @@ cleanup() { for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done; }
 trap cleanup EXIT INT TERM
 
 if [ "${SMTP_HOST:-127.0.0.1}" = 127.0.0.1 ] && [ -f scripts/mail/fake-smtp.ts ] && [ "${FAKE_SMTP:-1}" = 1 ]; then
-  npx tsx scripts/mail/fake-smtp.ts & pids+=($!)
+  npx tsx --conditions=react-server scripts/mail/fake-smtp.ts & pids+=($!)
 fi
 if [ -f scripts/mail/worker.ts ]; then
-  npx tsx scripts/mail/worker.ts & pids+=($!)
+  npx tsx --conditions=react-server scripts/mail/worker.ts & pids+=($!)
 fi
 
 node node_modules/next/dist/bin/next start -p "$PORT" -H 0.0.0.0 & pids+=($!)
 if wait_for_http "http://127.0.0.1:$PORT/api/health" 90; then
-  npx tsx db/seed/print-accounts.ts "http://localhost:$PORT" "$(( $(date +%s) - started ))"
+  npx tsx --conditions=react-server db/seed/print-accounts.ts "http://localhost:$PORT" "$(( $(date +%s) - started ))"
 else
   echo "the server did not become ready; see the output above"; exit 1
 fi

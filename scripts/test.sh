@@ -18,7 +18,7 @@ for name in rootbench_test rootbench_e2e; do
 done
 export TEST_DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_test)
 E2E_DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_e2e)
-DATABASE_URL=$TEST_DATABASE_URL npx tsx db/migrate.ts
+DATABASE_URL=$TEST_DATABASE_URL npx tsx --conditions=react-server db/migrate.ts
 
 step() { echo; echo "== $1"; }
 
@@ -34,18 +34,18 @@ DATABASE_URL=$TEST_DATABASE_URL npx vitest run --config tests/vitest.config.ts \
 
 step "browser tests"
 ensure_build
-DATABASE_URL=$E2E_DATABASE_URL npx tsx db/migrate.ts
-DATABASE_URL=$E2E_DATABASE_URL npx tsx db/seed/index.ts >/dev/null
+DATABASE_URL=$E2E_DATABASE_URL npx tsx --conditions=react-server db/migrate.ts
+DATABASE_URL=$E2E_DATABASE_URL npx tsx --conditions=react-server db/seed/index.ts >/dev/null
 E2E_PORT=${E2E_PORT:-3100}
 export E2E_SMTP_PORT=${E2E_SMTP_PORT:-2626}
 pids=()
 cleanup() { for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done; }
 trap cleanup EXIT
 if [ -f scripts/mail/fake-smtp.ts ]; then
-  SMTP_PORT=$E2E_SMTP_PORT SMTP_CONTROL_PORT=$((E2E_SMTP_PORT + 1)) npx tsx scripts/mail/fake-smtp.ts >"$results/smtp.log" 2>&1 & pids+=($!)
+  SMTP_PORT=$E2E_SMTP_PORT SMTP_CONTROL_PORT=$((E2E_SMTP_PORT + 1)) npx tsx --conditions=react-server scripts/mail/fake-smtp.ts >"$results/smtp.log" 2>&1 & pids+=($!)
 fi
 if [ -f scripts/mail/worker.ts ]; then
-  DATABASE_URL=$E2E_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT MAIL_POLL_MS=300 npx tsx scripts/mail/worker.ts >"$results/mail-worker.log" 2>&1 & pids+=($!)
+  DATABASE_URL=$E2E_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT MAIL_POLL_MS=300 npx tsx --conditions=react-server scripts/mail/worker.ts >"$results/mail-worker.log" 2>&1 & pids+=($!)
 fi
 NODE_ENV=production DATABASE_URL=$E2E_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT \
   node node_modules/next/dist/bin/next start -p "$E2E_PORT" -H 127.0.0.1 >"$results/server.log" 2>&1 & pids+=($!)

@@ -1,3 +1,5 @@
+import { readFileSync } from "node:fs";
+import path from "node:path";
 import type { Role } from "../schema";
 
 /** The demo password every seeded account shares; printed by `npm start`. */
@@ -10,11 +12,13 @@ export interface DemoAccount {
   email: string;
 }
 
-// Invented people of the invented demo workshop.
-export const DEMO_ACCOUNTS: DemoAccount[] = [
-  { id: "user-admin", role: "admin", name: "Ilse Marwick", email: "admin@rootbench.test" },
-  { id: "user-lead", role: "lead", name: "Tomas Brennholt", email: "lead@rootbench.test" },
-  { id: "user-senior", role: "senior", name: "Rosa Quenneville", email: "senior@rootbench.test" },
-  { id: "user-tech", role: "tech", name: "Dario Flintmoor", email: "tech@rootbench.test" },
-  { id: "user-trainee", role: "trainee", name: "Nell Ashgrove", email: "trainee@rootbench.test" },
-];
+interface WorkshopFile {
+  staff: { role: Role; name: string; email: string }[];
+}
+
+// The invented staff of the invented demo workshop (content/catalogue/workshop.json).
+const workshop = JSON.parse(
+  readFileSync(path.join(__dirname, "../../content/catalogue/workshop.json"), "utf8"),
+) as WorkshopFile;
+
+export const DEMO_ACCOUNTS: DemoAccount[] = workshop.staff.map((s) => ({ id: `user-${s.role}`, ...s }));

@@ -1,22 +1,31 @@
-import { sql } from "drizzle-orm";
-import { drizzle } from "drizzle-orm/postgres-js";
-import postgres from "postgres";
-import * as schema from "../schema";
-import { databaseUrl } from "../url";
+import path from "node:path";
+import { count } from "drizzle-orm";
+import { db, sql } from "@/db";
+import { users } from "@/db/schema";
+import { loadContent } from "@/lib/content/catalogue";
+import { DEMO_ACCOUNTS } from "./accounts";
+import { seedCatalogue } from "./catalogue";
+import { seedTrees } from "./trees";
 import { seedUsers } from "./users";
+import { seedWriteups } from "./writeups";
 
-/** Seeds the demo workshop into an empty database; does nothing when users already exist. */
-export async function seed(url = databaseUrl(), options: { force?: boolean } = {}): Promise<"seeded" | "skipped"> {
-  const connection = postgres(url, { max: 1, onnotice: () => {} });
-  const db = drizzle(connection, { schema });
-  try {
-    const [{ count }] = await db.execute<{ count: number }>(sql`select count(*)::int as count from users`);
-    if (count > 0 && !options.force) return "skipped";
-    await seedUsers(db);
-    return "seeded";
-  } finally {
-    await connection.end();
-  }
+/**
+ * Seeds the invented demo workshop into an empty database, in one transaction: accounts,
+ * catalogue, published trees and write-ups. Does nothing when users already exist.
+ */
+export async function seed(options: { force?: boolean; contentDir?: string } = {}): Promise<"seeded" | "skipped"> {
+  const [{ n }] = await db.select({ n: count() }).from(users);
+  if (n > 0 && !options.force) return "skipped";
+  const content = loadContent(options.contentDir ?? path.join(__dirname, "../../content"));
+  await db.transaction(async (tx) => {
+    await seedUsers(tx);
+    const catalogue = await seedCatalogue(tx, content);
+    const senior = DEMO_ACCOUNTS.find((a) => a.role === "senior")!;
+    await seedTrees(tx, content, catalogue.familyId, senior.id);
+    const userOfRole = new Map(DEMO_ACCOUNTS.map((a) => [a.role as string, a.id]));
+    await seedWriteups(tx, content, { ...catalogue, userOfRole });
+  });
+  return "seeded";
 }
 
 if (require.main === module) {
@@ -25,6 +34,7 @@ if (require.main === module) {
     .then((result) => console.log(`seed ${result} in ${Date.now() - started} ms`))
     .catch((error: unknown) => {
       console.error("seed failed:", error);
-      process.exit(1);
-    });
+      process.exitCode = 1;
+    })
+    .finally(() => sql.end());
 }
