@@ -11,9 +11,10 @@ import { seedWriteups } from "./writeups";
 
 /**
  * Seeds the invented demo workshop into an empty database, in one transaction: accounts,
- * catalogue, published trees and write-ups. Does nothing when users already exist.
+ * catalogue, published trees and write-ups (and, unless `history: false`, the simulated past).
+ * Does nothing when users already exist.
  */
-export async function seed(options: { force?: boolean; contentDir?: string } = {}): Promise<"seeded" | "skipped"> {
+export async function seed(options: { force?: boolean; contentDir?: string; history?: boolean } = {}): Promise<"seeded" | "skipped"> {
   const [{ n }] = await db.select({ n: count() }).from(users);
   if (n > 0 && !options.force) return "skipped";
   const content = loadContent(options.contentDir ?? path.join(__dirname, "../../content"));
