@@ -14,7 +14,7 @@ export function buildTree(spec: { rootId?: string; causes: Record<string, number
   const causes = Array.isArray(spec.causes)
     ? spec.causes
     : Object.entries(spec.causes).map(([id, priorWeight]) => ({ id, priorWeight }));
-  const nodes: DxNode[] = spec.nodes.map(({ options: _options, ...node }) => node);
+  const nodes: DxNode[] = spec.nodes.map((n) => ({ id: n.id, kind: n.kind, ...(n.causeId !== undefined ? { causeId: n.causeId } : {}), ...(n.costMinutes !== undefined ? { costMinutes: n.costMinutes } : {}) }));
   const options: DxOption[] = spec.nodes.flatMap((node) =>
     (node.options ?? []).map((o) => ({
       id: o.id,

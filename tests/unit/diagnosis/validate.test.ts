@@ -3,8 +3,6 @@ import { validateTree, type DxTree } from "@/lib/diagnosis";
 import { buildTree, causeNode, question, workshopTree } from "./fixtures";
 
 // The rules are DESIGN §4 "Tree validation" and issue 3's list of codes; each test breaks one.
-const codes = (tree: DxTree) => validateTree(tree).map((p) => p.code);
-
 function edit(change: (tree: DxTree) => void): DxTree {
   const tree = workshopTree();
   change(tree);

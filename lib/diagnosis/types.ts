@@ -1,0 +1,150 @@
+export type Strength = "rules_out" | "against" | "neutral" | "for" | "strong";
+
+/** A strength, or a raw non-negative weight; 0 rules the cause out. */
+export type Weight = Strength | number;
+
+export interface DxNode {
+  id: string;
+  kind: "question" | "check" | "cause" | "caution";
+  causeId?: string;
+  costMinutes?: number;
+}
+
+export interface DxOption {
+  id: string;
+  nodeId: string;
+  to: string | null;
+  label: string;
+  dontKnow?: boolean;
+  /** Keyed by causeId; a cause not named is neutral. */
+  evidence: Record<string, Weight>;
+}
+
+export interface DxCause {
+  id: string;
+  priorWeight: number;
+  inspectMinutes?: number;
+}
+
+export interface DxTree {
+  rootId: string;
+  nodes: DxNode[];
+  options: DxOption[];
+  causes: DxCause[];
+}
+
+export interface DxAnswer {
+  nodeId: string;
+  optionId: string;
+}
+
+export interface DxSettings {
+  /** Defaults: rules_out 0, against 1/3, neutral 1, for 3, strong 9. */
+  weights?: Partial<Record<Strength, number>>;
+  /** Confirmed bench counts per causeId for the case's motor family. */
+  history?: Record<string, number>;
+  /** α, pseudo-cases behind the editor's prior weights; default 10. */
+  priorStrength?: number;
+  /** Default 0.05; 0 disables the unlisted hypothesis. */
+  unlistedShare?: number;
+  /** Learned P(o|k), optionId → causeId → probability; overrides the authored likelihood. */
+  likelihoods?: Record<string, Record<string, number>>;
+  /** Top-cause probability at which to suggest concluding; default 0.8. */
+  stopThreshold?: number;
+  /** Below this expected gain (bits) a node counts as uninformative; default 0.05. */
+  minGainBits?: number;
+}
+
+export interface ScoredCause {
+  causeId: string;
+  probability: number;
+  ruledOutBy: DxAnswer | null;
+}
+
+export interface CauseScores {
+  causes: ScoredCause[];
+  unlisted: number;
+}
+
+export interface RankedQuestion {
+  nodeId: string;
+  gainBits: number;
+  gainPerMinute: number;
+  separates: string[];
+}
+
+export interface Conclusion {
+  kind: "cause" | "unlisted" | "continue";
+  causeId?: string;
+  probability: number;
+}
+
+export interface BenchItem {
+  id: string;
+  probability: number;
+  costMinutes: number;
+}
+
+export interface BenchPlan {
+  order: string[];
+  expectedMinutes: number;
+}
+
+export interface TreeProblem {
+  code: string;
+  nodeId?: string;
+  optionId?: string;
+  message: string;
+}
+
+export interface ClosedCase {
+  answers: DxAnswer[];
+  confirmedCauseId: string;
+}
+
+export interface EvidenceSuggestion {
+  optionId: string;
+  causeId: string;
+  authored: number;
+  learned: number;
+  cases: number;
+}
+
+export interface LearnedLikelihoods {
+  likelihoods: DxSettings["likelihoods"];
+  suggestions: EvidenceSuggestion[];
+}
+
+export interface Interval {
+  low: number;
+  high: number;
+}
+
+export interface RankingRow {
+  probabilities: Record<string, number>;
+  confirmed: string;
+}
+
+export interface CalibrationBin {
+  from: number;
+  to: number;
+  n: number;
+  meanPredicted: number;
+  observed: number;
+}
+
+export interface RankingScores {
+  n: number;
+  top1: number;
+  top3: number;
+  brier: number;
+  logLoss: number;
+  calibration: CalibrationBin[];
+}
+
+export interface PathWalk {
+  visited: string[];
+  current: string | null;
+  cautions: string[];
+  reachedCauseIds: string[];
+}
