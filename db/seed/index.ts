@@ -5,6 +5,7 @@ import { users } from "@/db/schema";
 import { loadContent } from "@/lib/content/catalogue";
 import { DEMO_ACCOUNTS } from "./accounts";
 import { seedCatalogue } from "./catalogue";
+import { seedHistory } from "./history";
 import { seedTrees } from "./trees";
 import { seedUsers } from "./users";
 import { seedWriteups } from "./writeups";
@@ -22,9 +23,10 @@ export async function seed(options: { force?: boolean; contentDir?: string; hist
     await seedUsers(tx);
     const catalogue = await seedCatalogue(tx, content);
     const senior = DEMO_ACCOUNTS.find((a) => a.role === "senior")!;
-    await seedTrees(tx, content, catalogue.familyId, senior.id);
+    const versionOf = await seedTrees(tx, content, catalogue.familyId, senior.id);
     const userOfRole = new Map(DEMO_ACCOUNTS.map((a) => [a.role as string, a.id]));
     await seedWriteups(tx, content, { ...catalogue, userOfRole });
+    if (options.history !== false) await seedHistory(tx, content, { ...catalogue, userOfRole, versionOf });
   });
   return "seeded";
 }
