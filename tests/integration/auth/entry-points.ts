@@ -12,8 +12,13 @@ export interface ActionEntry {
   exportName: string;
   spec: ActionSpec<z.ZodType, unknown> | null;
   allowed: readonly Role[] | "public";
+  /**
+   * Optional fixture maker, run before each call on the demo database (resetToDemo has loaded the
+   * catalogue, accounts, published trees and write-ups); its result reaches `sample` as `fixture`.
+   */
+  setup?: (ctx: { caller: SessionUser | null; target: SessionUser }) => Promise<Record<string, unknown>>;
   /** A valid input for `caller`, so an allowed caller gets past validation. */
-  sample: (ctx: { caller: SessionUser | null; target: SessionUser }) => Record<string, unknown>;
+  sample: (ctx: { caller: SessionUser | null; target: SessionUser; fixture: Record<string, unknown> }) => Record<string, unknown>;
 }
 
 export interface RouteEntry {
@@ -23,6 +28,8 @@ export interface RouteEntry {
   allowed: readonly Role[] | "public";
   params?: Record<string, string>;
   body?: unknown;
+  /** Optional fixture maker (as for actions); may return `params`, `body` and `query` to use. */
+  setup?: () => Promise<{ params?: Record<string, string>; body?: unknown; query?: string }>;
 }
 
 export interface EntryPointRows {

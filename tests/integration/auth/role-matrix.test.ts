@@ -4,7 +4,8 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { executeAction } from "@/lib/actions/define";
 import type { Role } from "@/lib/auth/roles";
 import { ALL_ROLES } from "@/lib/auth/roles";
-import { createRoleUsers, createUser, truncateAll } from "../../support/db";
+import { createRoleUsers, createUser } from "../../support/db";
+import { resetToDemo } from "../../support/seed";
 import { params, request } from "../../support/requests";
 import { ACTION_ENTRIES, ROUTE_ENTRIES } from "./entry-points";
 
@@ -64,7 +65,7 @@ describe("role matrix", () => {
   let users: Awaited<ReturnType<typeof createRoleUsers>>;
 
   beforeAll(async () => {
-    await truncateAll();
+    await resetToDemo();
     users = await createRoleUsers();
   });
 
@@ -74,7 +75,8 @@ describe("role matrix", () => {
       it(`action ${entry.exportName} as ${label(caller)} → ${expected}`, async () => {
         const target = await createUser("tech");
         const user = caller ? users[caller] : null;
-        const result = await executeAction(entry.spec!, entry.sample({ caller: user, target }), user);
+        const fixture = entry.setup ? await entry.setup({ caller: user, target }) : {};
+        const result = await executeAction(entry.spec!, entry.sample({ caller: user, target, fixture }), user);
         if (expected === "allowed") {
           expect(result.ok || ![401, 403].includes(result.status), JSON.stringify(result)).toBe(true);
         } else {
@@ -93,9 +95,11 @@ describe("role matrix", () => {
         const handler = mod[entry.method] as (req: unknown, ctx: unknown) => Promise<Response>;
         // DELETE signs the session out, so each call gets a fresh session for the caller.
         const token = caller ? (await import("@/lib/auth/session")).createSession(users[caller].id).then((s) => s.token) : undefined;
+        const fixture = entry.setup ? await entry.setup() : {};
+        const url = fixture.query ? `${entry.path}?${fixture.query}` : entry.path;
         const response = await handler(
-          request(entry.path, { method: entry.method, token: await token, body: entry.body }),
-          params(entry.params ?? {}),
+          request(url, { method: entry.method, token: await token, body: fixture.body ?? entry.body }),
+          params(fixture.params ?? entry.params ?? {}),
         );
         if (expected === "allowed") expect([401, 403]).not.toContain(response.status);
         else expect(response.status).toBe(expected);
