@@ -1,0 +1,59 @@
+import "server-only";
+import { sql } from "@/db";
+import type { CaseStatus } from "@/db/schema";
+import type { DxSettings } from "@/lib/diagnosis";
+import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
+
+export interface CaseContext {
+  id: number;
+  reference: string;
+  status: CaseStatus;
+  familyId: number;
+  treeVersionId: number;
+  /** Recorded steps in order, with database ids. */
+  steps: { id: number; seq: number; nodeId: number; optionId: number }[];
+  settings: DxSettings;
+}
+
+interface Row {
+  id: number;
+  reference: string;
+  status: CaseStatus;
+  family_id: number;
+  tree_version_id: number;
+  steps: [number, number, number, number][];
+  history: Record<string, number>;
+  settings: unknown;
+}
+
+/**
+ * Everything an answer needs from the database, in one round trip: the case, its steps, the
+ * shop's settings and the confirmed history for the case's motor family — counts of outcome
+ * causes of closed cases, by cause slug (the priors' n_k, DESIGN §4).
+ */
+export async function loadCaseContext(caseId: number): Promise<CaseContext | null> {
+  const rows = await sql<Row[]>`
+    select c.id, c.reference, c.status, c.family_id, c.tree_version_id,
+      coalesce((select json_agg(json_build_array(s.id, s.seq, s.node_id, s.option_id) order by s.seq)
+                from case_steps s where s.case_id = c.id), '[]'::json) as steps,
+      coalesce((select json_object_agg(h.slug, h.n) from (
+                  select k.slug, count(*)::int as n
+                  from outcome_causes oc
+                  join cases hc on hc.id = oc.case_id
+                  join causes k on k.id = oc.cause_id
+                  where hc.family_id = c.family_id and hc.status = 'closed'
+                  group by k.slug) h), '{}'::json) as history,
+      (select value from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) as settings
+    from cases c where c.id = ${caseId}`;
+  const row = rows[0];
+  if (!row) return null;
+  return {
+    id: row.id,
+    reference: row.reference,
+    status: row.status,
+    familyId: row.family_id,
+    treeVersionId: row.tree_version_id,
+    steps: row.steps.map(([id, seq, nodeId, optionId]) => ({ id, seq, nodeId, optionId })),
+    settings: dxSettingsFor(row.settings, row.history),
+  };
+}

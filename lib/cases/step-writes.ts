@@ -1,0 +1,43 @@
+import "server-only";
+import { sql } from "@/db";
+import type { StoredRanking } from "./ranking-types";
+
+export interface InsertedStep {
+  id: number;
+  seq: number;
+  answeredAt: Date;
+}
+
+/**
+ * Appends a step in one statement, which is its own transaction: it locks the case row (by
+ * touching updated_at) while the case is still open, and inserts only if the step the ranking was computed after is still
+ * the last one (that row is share-locked, so an undo in between makes this insert nothing).
+ * unique(case_id, seq) turns two racing answers into one success and one 23505.
+ * Returns null when the guard fails. (Raw postgres.js here: drizzle's client leaves json and
+ * timestamp parameters unserialised, hence the explicit JSON text and epoch milliseconds.)
+ */
+export async function appendStep(input: {
+  caseId: number;
+  previous: { id: number; seq: number } | null;
+  nodeId: number;
+  optionId: number;
+  userId: string;
+  ranking: StoredRanking;
+}): Promise<InsertedStep | null> {
+  const seq = (input.previous?.seq ?? 0) + 1;
+  const previousId = input.previous?.id ?? null;
+  const rows = await sql<{ id: number; seq: number; answered_ms: number }[]>`
+    with open_case as (
+      update cases set updated_at = now() where id = ${input.caseId} and status = 'open' returning id
+    ), previous as (
+      select id from case_steps where id = ${previousId} and case_id = ${input.caseId} for share
+    )
+    insert into case_steps (case_id, seq, node_id, option_id, answered_by, ranking)
+    select open_case.id, ${seq}, ${input.nodeId}, ${input.optionId}, ${input.userId}, ${JSON.stringify(input.ranking)}::jsonb
+    from open_case
+    where (${previousId}::int is null and not exists (select 1 from case_steps where case_id = ${input.caseId}))
+       or exists (select 1 from previous)
+    returning id, seq, (extract(epoch from answered_at) * 1000)::float8 as answered_ms`;
+  const row = rows[0];
+  return row ? { id: row.id, seq: row.seq, answeredAt: new Date(row.answered_ms) } : null;
+}

@@ -1,0 +1,36 @@
+// Sends what the outbox holds: polls mail_outbox every MAIL_POLL_MS (default 2000) and delivers
+// over SMTP (SMTP_HOST, SMTP_PORT). Failures are retried with backoff; see lib/mail/deliver.ts.
+import { sql } from "../../db";
+import { deliverDue } from "../../lib/mail/deliver";
+import { smtpConfigFromEnv, smtpTransport } from "../../lib/mail/transport";
+import { loadShop } from "../../lib/cases/shop";
+
+const pollMs = Number(process.env.MAIL_POLL_MS ?? 2000);
+let running = true;
+
+async function main() {
+  const config = smtpConfigFromEnv();
+  const transport = smtpTransport(config);
+  const shop = await loadShop();
+  const from = process.env.MAIL_FROM ?? `${shop.name} <${shop.email}>`;
+  console.log(`[mail-worker] sending to ${config.host}:${config.port} every ${pollMs} ms as ${from}`);
+  while (running) {
+    try {
+      const report = await deliverDue(transport, { from });
+      if (report.sent || report.retrying || report.failed) console.log(`[mail-worker] sent ${report.sent}, retrying ${report.retrying}, failed ${report.failed}`);
+    } catch (error) {
+      console.error("[mail-worker] pass failed:", error instanceof Error ? error.message : error);
+    }
+    await new Promise((resolve) => setTimeout(resolve, pollMs));
+  }
+  transport.close();
+  await sql.end({ timeout: 5 });
+}
+
+const stop = () => { running = false; };
+process.on("SIGTERM", stop);
+process.on("SIGINT", stop);
+main().catch((error: unknown) => {
+  console.error("[mail-worker] stopped:", error);
+  process.exit(1);
+});

@@ -1,0 +1,114 @@
+import net from "node:net";
+import { eq } from "drizzle-orm";
+import { afterEach, beforeEach, describe, expect, it } from "vitest";
+import { mailOutbox } from "@/db/schema";
+import { executeAction } from "@/lib/actions/define";
+import { retryMailAction } from "@/lib/mail/actions";
+import { MAX_ATTEMPTS, retryDelayMs } from "@/lib/mail/backoff";
+import { deliverDue } from "@/lib/mail/deliver";
+import { startFakeSmtp, type FakeSmtp } from "@/lib/mail/fake-smtp";
+import { enqueueMail } from "@/lib/mail/outbox";
+import { smtpTransport } from "@/lib/mail/transport";
+import { createUser, db, truncateAll } from "../../support/db";
+
+const FROM = "Test Workshop <bench@workshop.example.test>";
+
+async function freePort(): Promise<number> {
+  const server = net.createServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  const { port } = server.address() as net.AddressInfo;
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+  return port;
+}
+
+async function message(id: number) {
+  const [row] = await db.select().from(mailOutbox).where(eq(mailOutbox.id, id));
+  return row;
+}
+
+describe("the mail outbox", () => {
+  let fake: FakeSmtp | null = null;
+  beforeEach(truncateAll);
+  afterEach(async () => {
+    await fake?.close();
+    fake = null;
+  });
+
+  it("keeps a message while the SMTP server is down and sends it when it is back", async () => {
+    const port = await freePort(); // nothing listens here yet
+    const transport = smtpTransport({ host: "127.0.0.1", port });
+    const id = await enqueueMail(db, { to: "rider@example.test", subject: "Your unit — booked in", text: "Hello\nTwo lines, one €.", html: "<p>Hello</p>" });
+    const t0 = new Date();
+
+    const down = await deliverDue(transport, { from: FROM, now: t0 });
+    expect(down).toEqual({ sent: 0, retrying: 1, failed: 0 });
+    const waiting = await message(id);
+    expect(waiting.status).toBe("queued");
+    expect(waiting.attempts).toBe(1);
+    expect(waiting.lastError).toMatch(/ECONNREFUSED/);
+    expect(waiting.nextAttemptAt.getTime()).toBe(t0.getTime() + retryDelayMs(1));
+
+    // Not due yet: a pass before the backoff ends leaves it alone.
+    expect(await deliverDue(transport, { from: FROM, now: new Date(t0.getTime() + 1000) })).toEqual({ sent: 0, retrying: 0, failed: 0 });
+
+    fake = await startFakeSmtp({ port });
+    const back = await deliverDue(transport, { from: FROM, now: new Date(t0.getTime() + retryDelayMs(1)) });
+    expect(back).toEqual({ sent: 1, retrying: 0, failed: 0 });
+    const sent = await message(id);
+    expect(sent.status).toBe("sent");
+    expect(sent.sentAt).toBeInstanceOf(Date);
+    expect(sent.lastError).toBeNull();
+    expect(fake.messages).toHaveLength(1);
+    expect(fake.messages[0].subject).toBe("Your unit — booked in");
+    expect(fake.messages[0].envelopeTo).toEqual(["rider@example.test"]);
+    expect(fake.messages[0].text).toBe("Hello\nTwo lines, one €.");
+    expect(fake.messages[0].html).toBe("<p>Hello</p>");
+    transport.close();
+  });
+
+  it("backs off exponentially and marks the message failed after the last attempt; retry now queues it again", async () => {
+    // The schedule itself: 30 s doubling, capped at an hour (our rule, checked from its definition).
+    expect([1, 2, 3, 4].map(retryDelayMs)).toEqual([30_000, 60_000, 120_000, 240_000]);
+    expect(retryDelayMs(20)).toBe(3_600_000);
+
+    const transport = smtpTransport({ host: "127.0.0.1", port: await freePort() });
+    const id = await enqueueMail(db, { to: "dealer@example.test", subject: "s", text: "t" });
+    let now = new Date();
+    for (let attempt = 1; attempt <= MAX_ATTEMPTS; attempt++) {
+      const report = await deliverDue(transport, { from: FROM, now });
+      expect(report.failed).toBe(attempt === MAX_ATTEMPTS ? 1 : 0);
+      now = new Date(now.getTime() + retryDelayMs(attempt));
+    }
+    const failed = await message(id);
+    expect(failed.status).toBe("failed");
+    expect(failed.attempts).toBe(MAX_ATTEMPTS);
+
+    const admin = await createUser("admin");
+    const tech = await createUser("tech");
+    expect(await executeAction(retryMailAction, { messageId: id }, tech)).toMatchObject({ ok: false, status: 403 });
+    expect((await executeAction(retryMailAction, { messageId: id }, admin)).ok).toBe(true);
+    expect((await message(id)).status).toBe("queued");
+    transport.close();
+  });
+
+  it("two workers never send the same message twice", async () => {
+    fake = await startFakeSmtp({ port: 0 });
+    const transport = smtpTransport({ host: "127.0.0.1", port: fake.port });
+    for (let i = 0; i < 5; i++) await enqueueMail(db, { to: `r${i}@example.test`, subject: `m${i}`, text: "x" });
+    const [a, b] = await Promise.all([deliverDue(transport, { from: FROM, batch: 3 }), deliverDue(transport, { from: FROM, batch: 3 })]);
+    expect(a.sent + b.sent).toBe(5);
+    expect(fake.messages.map((m) => m.subject).sort()).toEqual(["m0", "m1", "m2", "m3", "m4"]);
+    transport.close();
+  });
+
+  it("the control port lists and clears what the fake caught", async () => {
+    fake = await startFakeSmtp({ port: 0, controlPort: 0 });
+    const transport = smtpTransport({ host: "127.0.0.1", port: fake.port });
+    await transport.sendMail({ from: FROM, to: "a@example.test", subject: "Ünïcode subject", text: "body" });
+    const listed = (await (await fetch(`http://127.0.0.1:${fake.controlPort}/messages`)).json()) as { subject: string }[];
+    expect(listed.map((m) => m.subject)).toEqual(["Ünïcode subject"]);
+    await fetch(`http://127.0.0.1:${fake.controlPort}/messages`, { method: "DELETE" });
+    expect(await (await fetch(`http://127.0.0.1:${fake.controlPort}/messages`)).json()).toEqual([]);
+    transport.close();
+  });
+});
