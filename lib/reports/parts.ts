@@ -1,0 +1,44 @@
+import "server-only";
+import { sql as pg } from "@/db";
+import { monthsOf } from "./period";
+import { inScope, type ReportScope } from "./scope";
+
+export interface PartTotal {
+  slug: string;
+  name: string;
+  sku: string;
+  total: number;
+  perMonth: number;
+}
+
+export interface PartsDemand {
+  months: string[];
+  parts: PartTotal[];
+  /** quantity by month, then by part slug */
+  byMonth: Record<string, Record<string, number>>;
+}
+
+/** Parts replaced per month on closed cases in scope (quantities summed in Postgres), to plan stock. */
+export async function partsDemand(scope: ReportScope): Promise<PartsDemand> {
+  const rows = await pg<{ month: string; slug: string; name: string; sku: string; qty: number }[]>`
+    select to_char(date_trunc('month', c.closed_at at time zone 'UTC'), 'YYYY-MM') as month,
+           p.slug, p.name, p.sku, sum(op.quantity)::int as qty
+    from cases c
+    join outcome_parts op on op.case_id = c.id
+    join parts p on p.id = op.part_id
+    where ${inScope(scope)}
+    group by 1, p.slug, p.name, p.sku`;
+  const months = monthsOf(scope.filter.period);
+  const byMonth: Record<string, Record<string, number>> = Object.fromEntries(months.map((m) => [m, {}]));
+  const totals = new Map<string, PartTotal>();
+  for (const r of rows) {
+    (byMonth[r.month] ??= {})[r.slug] = r.qty;
+    const t = totals.get(r.slug) ?? { slug: r.slug, name: r.name, sku: r.sku, total: 0, perMonth: 0 };
+    t.total += r.qty;
+    totals.set(r.slug, t);
+  }
+  const parts = [...totals.values()]
+    .map((t) => ({ ...t, perMonth: t.total / Math.max(1, months.length) }))
+    .sort((a, b) => b.total - a.total || a.name.localeCompare(b.name));
+  return { months, parts, byMonth };
+}

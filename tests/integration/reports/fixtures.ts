@@ -1,0 +1,100 @@
+import { eq } from "drizzle-orm";
+import { db } from "@/db";
+import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions, type CaseStatus } from "@/db/schema";
+import { loadGraph } from "@/lib/trees/graph";
+
+/** Catalogue and tree ids of the demo content loaded by resetToDemo(). */
+export interface DemoIds {
+  family: (slug: string) => number;
+  cause: (slug: string) => number;
+  part: (slug: string) => number;
+  /** The published version of a tree, with a (node, option) pair to write steps with. */
+  version: (treeSlug: string) => { id: number; nodeId: number; optionId: number };
+}
+
+export async function demoIds(): Promise<DemoIds> {
+  const [familyRows, causeRows, partRows, versionRows] = await Promise.all([
+    db.select({ id: motorFamilies.id, slug: motorFamilies.slug }).from(motorFamilies),
+    db.select({ id: causes.id, slug: causes.slug }).from(causes),
+    db.select({ id: parts.id, slug: parts.slug }).from(parts),
+    db.select({ id: treeVersions.id, slug: trees.slug }).from(treeVersions).innerJoin(trees, eq(trees.id, treeVersions.treeId)).where(eq(treeVersions.state, "published")),
+  ]);
+  const versions = new Map<string, { id: number; nodeId: number; optionId: number }>();
+  for (const v of versionRows) {
+    const graph = (await loadGraph(v.id))!;
+    const option = graph.options.find((o) => o.fromKey === graph.rootKey)!;
+    versions.set(v.slug, { id: v.id, nodeId: graph.nodes.find((n) => n.key === graph.rootKey)!.id, optionId: option.id });
+  }
+  const get = <T>(map: Map<string, T>, what: string) => (key: string): T => {
+    const value = map.get(key);
+    if (value === undefined) throw new Error(`no ${what} ${key} in the demo content`);
+    return value;
+  };
+  return {
+    family: get(new Map(familyRows.map((r) => [r.slug, r.id])), "family"),
+    cause: get(new Map(causeRows.map((r) => [r.slug, r.id])), "cause"),
+    part: get(new Map(partRows.map((r) => [r.slug, r.id])), "part"),
+    version: get(versions, "tree"),
+  };
+}
+
+export interface CaseSpec {
+  family: string;
+  tree: string;
+  status?: CaseStatus;
+  createdAt?: Date;
+  closedAt?: Date | null;
+  /** Primary confirmed cause slug; null records an "other" outcome (cause not in the catalogue). */
+  primary?: string | null;
+  secondary?: string[];
+  parts?: { slug: string; quantity: number }[];
+  ranking?: Record<string, number> | null;
+  /** Write one triage step (default true); imported records have none. */
+  steps?: boolean;
+  serial?: string;
+  repeatOf?: number | null;
+  reference?: string;
+}
+
+let counter = 0;
+
+/** Inserts cases with their outcomes in bulk; returns their ids in spec order. */
+export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<number[]> {
+  const out: number[] = [];
+  for (let start = 0; start < specs.length; start += 400) {
+    const group = specs.slice(start, start + 400);
+    const rows = await db.insert(cases).values(group.map((s) => {
+      const closedAt = s.closedAt ?? null;
+      const createdAt = s.createdAt ?? (closedAt ? new Date(closedAt.getTime() - 5 * 86_400_000) : new Date());
+      return {
+        reference: s.reference ?? `T-${(++counter).toString().padStart(6, "0")}-${Math.random().toString(36).slice(2, 6)}`,
+        status: s.status ?? "closed", callerName: "Test caller", callerKind: "rider" as const, familyId: ids.family(s.family),
+        serial: s.serial ?? "", ridingUse: "road" as const, symptom: s.tree, treeVersionId: ids.version(s.tree).id,
+        finalRanking: s.ranking ?? null, createdAt, closedAt, repeatOfCaseId: s.repeatOf ?? null,
+      };
+    })).returning({ id: cases.id });
+    const caseIds = rows.map((r) => r.id);
+    out.push(...caseIds);
+    const withOutcome = group.map((s, i) => ({ s, id: caseIds[i] })).filter(({ s }) => s.primary !== undefined);
+    if (withOutcome.length) {
+      await db.insert(caseOutcomes).values(withOutcome.map(({ s, id }) => ({ caseId: id, otherCause: s.primary === null ? "Something else entirely" : "" })));
+      const causeRows = withOutcome.flatMap(({ s, id }) => [
+        ...(s.primary ? [{ caseId: id, causeId: ids.cause(s.primary), primary: true }] : []),
+        ...(s.secondary ?? []).map((slug) => ({ caseId: id, causeId: ids.cause(slug), primary: false })),
+      ]);
+      if (causeRows.length) await db.insert(outcomeCauses).values(causeRows);
+    }
+    const partRows = group.flatMap((s, i) => (s.parts ?? []).map((p) => ({ caseId: caseIds[i], partId: ids.part(p.slug), quantity: p.quantity })));
+    if (partRows.length) await db.insert(outcomeParts).values(partRows);
+    const stepRows = group.flatMap((s, i) => (s.steps === false ? [] : [{
+      caseId: caseIds[i], seq: 1, nodeId: ids.version(s.tree).nodeId, optionId: ids.version(s.tree).optionId, ranking: {},
+    }]));
+    if (stepRows.length) await db.insert(caseSteps).values(stepRows);
+  }
+  return out;
+}
+
+/** n copies of a spec. */
+export const times = (n: number, spec: CaseSpec): CaseSpec[] => Array.from({ length: n }, () => ({ ...spec }));
+
+export const day = (iso: string) => new Date(`${iso}T12:00:00Z`);
