@@ -145,6 +145,12 @@ case "${1:-}" in
   start) start ;;
   stop) stop ;;
   status) status ;;
+  restart)
+    ensure_installed
+    setup_paths
+    as_pg "$BIN/pg_ctl" -D "$PGDATA" -m fast -w -t 30 -o "-c listen_addresses=127.0.0.1 -p $PORT -k $SOCKDIR" restart >/dev/null
+    log "restarted"
+    ;;
   reset)
     start
     drop_database "$DB_NAME"

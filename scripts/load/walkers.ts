@@ -1,0 +1,145 @@
+// Virtual technicians walking triage cases through POST /api/cases/:id/steps, for the load script
+// and the fault test. Each walker keeps one case going, answers its current question with a
+// random option, and starts a new case when the walk ends. Bounded by time and request count.
+import { asc, eq, inArray } from "drizzle-orm";
+import { db } from "@/db";
+import { caseSteps, motorFamilies, treeScope, treeVersions, trees } from "@/db/schema";
+import { createSession } from "@/lib/auth/session";
+import { startCase } from "@/lib/cases/start";
+import { walkPath, type DxAnswer } from "@/lib/diagnosis";
+import { loadGraph, toDxTree, type TreeGraph } from "@/lib/trees/graph";
+
+export interface LoadOptions {
+  baseUrl: string;
+  walkers: number;
+  seconds: number;
+  maxRequests?: number;
+  userId: string;
+}
+
+export interface LoadResult {
+  requests: number;
+  ok: number;
+  failed: number;
+  errors: Record<string, number>;
+  latenciesMs: number[];
+  ackedStepIds: number[];
+  caseIds: number[];
+}
+
+async function publishedTrees(): Promise<{ graph: TreeGraph; familyId: number }[]> {
+  const versions = await db
+    .select({ id: treeVersions.id, treeId: treeVersions.treeId })
+    .from(treeVersions)
+    .innerJoin(trees, eq(trees.id, treeVersions.treeId))
+    .where(eq(treeVersions.state, "published"))
+    .orderBy(asc(treeVersions.id));
+  const families = await db.select({ id: motorFamilies.id }).from(motorFamilies).orderBy(asc(motorFamilies.id));
+  const out: { graph: TreeGraph; familyId: number }[] = [];
+  for (const v of versions) {
+    const scope = await db.select({ familyId: treeScope.familyId }).from(treeScope).where(eq(treeScope.treeId, v.treeId));
+    out.push({ graph: (await loadGraph(v.id))!, familyId: scope[0]?.familyId ?? families[0].id });
+  }
+  return out;
+}
+
+async function stepsOf(caseId: number, graph: TreeGraph): Promise<DxAnswer[]> {
+  const rows = await db.select().from(caseSteps).where(eq(caseSteps.caseId, caseId)).orderBy(asc(caseSteps.seq));
+  const nodeKey = new Map(graph.nodes.map((n) => [n.id, n.key]));
+  const optionKey = new Map(graph.options.map((o) => [o.id, o.key]));
+  return rows.map((r) => ({ nodeId: nodeKey.get(r.nodeId)!, optionId: optionKey.get(r.optionId)! }));
+}
+
+export async function runLoad(options: LoadOptions): Promise<LoadResult> {
+  const treesAvailable = await publishedTrees();
+  const result: LoadResult = { requests: 0, ok: 0, failed: 0, errors: {}, latenciesMs: [], ackedStepIds: [], caseIds: [] };
+  const deadline = Date.now() + options.seconds * 1000;
+  const max = options.maxRequests ?? Number.POSITIVE_INFINITY;
+  let counter = 0;
+
+  async function walker(index: number) {
+    const { token } = await createSession(options.userId);
+    const headers = { cookie: `rb_session=${token}`, "content-type": "application/json", origin: options.baseUrl };
+    while (Date.now() < deadline && result.requests < max) {
+      const { graph, familyId } = treesAvailable[(index + counter++) % treesAvailable.length];
+      const dx = toDxTree(graph);
+      let created: { id: number };
+      try {
+        created = await startCase({
+          callerName: `Load caller ${index}`, callerKind: "rider", phone: "+00 555 0000 0000", email: "", familyId,
+          serial: "", ridingUse: "road", treeVersionId: graph.versionId, callerWords: "",
+        }, options.userId);
+      } catch {
+        await new Promise((r) => setTimeout(r, 200));
+        continue;
+      }
+      result.caseIds.push(created.id);
+      let answers: DxAnswer[] = [];
+      while (Date.now() < deadline && result.requests < max) {
+        const current = walkPath(dx, answers).current;
+        if (!current) break;
+        const choices = graph.options.filter((o) => o.fromKey === current);
+        const option = choices[Math.floor(Math.random() * choices.length)];
+        const node = graph.nodes.find((n) => n.key === current)!;
+        const started = performance.now();
+        result.requests++;
+        try {
+          const response = await fetch(`${options.baseUrl}/api/cases/${created.id}/steps`, {
+            method: "POST", headers, body: JSON.stringify({ nodeId: node.id, optionId: option.id }),
+          });
+          const elapsed = performance.now() - started;
+          if (response.status === 201) {
+            const body = (await response.json()) as { step: { id: number } };
+            result.ok++;
+            result.latenciesMs.push(elapsed);
+            result.ackedStepIds.push(body.step.id);
+            answers.push({ nodeId: current, optionId: option.key });
+          } else {
+            result.failed++;
+            const key = `HTTP ${response.status}`;
+            result.errors[key] = (result.errors[key] ?? 0) + 1;
+            await response.text();
+            answers = await resync(created.id, graph);
+          }
+        } catch (error) {
+          result.failed++;
+          const key = error instanceof Error ? error.message.slice(0, 60) : "network error";
+          result.errors[key] = (result.errors[key] ?? 0) + 1;
+          await new Promise((r) => setTimeout(r, 100));
+          answers = await resync(created.id, graph);
+        }
+      }
+    }
+  }
+
+  // After a failure the walker re-reads what the server stored, as the triage screen does.
+  async function resync(caseId: number, graph: TreeGraph): Promise<DxAnswer[]> {
+    for (let attempt = 0; attempt < 50; attempt++) {
+      try {
+        return await stepsOf(caseId, graph);
+      } catch {
+        await new Promise((r) => setTimeout(r, 200));
+      }
+    }
+    return [];
+  }
+
+  await Promise.all(Array.from({ length: options.walkers }, (_, i) => walker(i)));
+  return result;
+}
+
+/** Steps the server acknowledged but the database lacks, and steps per case beyond what was acknowledged. */
+export async function auditSteps(result: LoadResult): Promise<{ stored: number; missing: number; unacknowledged: number }> {
+  if (result.caseIds.length === 0) return { stored: 0, missing: 0, unacknowledged: 0 };
+  const rows = await db.select({ id: caseSteps.id }).from(caseSteps).where(inArray(caseSteps.caseId, result.caseIds));
+  const stored = new Set(rows.map((r) => r.id));
+  const missing = result.ackedStepIds.filter((id) => !stored.has(id)).length;
+  return { stored: stored.size, missing, unacknowledged: stored.size - (result.ackedStepIds.length - missing) };
+}
+
+export function percentile(values: number[], p: number): number {
+  if (!values.length) return 0;
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+}
+
