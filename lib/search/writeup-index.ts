@@ -1,0 +1,106 @@
+import MiniSearch from "minisearch";
+import type { SearchDoc, SearchFilters } from "./types";
+
+const FIELDS = ["title", "summary", "text", "causes", "parts", "families", "tags"] as const;
+type Field = (typeof FIELDS)[number];
+
+/** Title first, then what failed and what was fitted, then the rest; the body text weighs least. */
+export const FIELD_BOOSTS: Record<Field, number> = { title: 5, causes: 3, parts: 3, tags: 2, families: 1.5, summary: 1.5, text: 1 };
+
+/**
+ * Edit distance allowed per query word: a fifth of its length, rounded up, at most 2, none under
+ * four letters. Rounding up lets one swapped pair of letters ("bearnig", two edits) still match a
+ * seven-letter word, which rounding to nearest would not.
+ */
+export function fuzzyDistance(term: string): number {
+  return term.length < 4 ? 0 : Math.min(2, Math.ceil(term.length * 0.2));
+}
+
+export interface WriteupHit {
+  doc: SearchDoc;
+  score: number;
+  /** The indexed words that matched, for highlighting. */
+  terms: string[];
+  /** Fields in which they matched. */
+  fields: string[];
+}
+
+export interface Facet {
+  value: string;
+  label: string;
+  count: number;
+}
+
+function matchesFilters(doc: SearchDoc, filters: SearchFilters): boolean {
+  return (!filters.family || doc.familySlugs.includes(filters.family))
+    && (!filters.cause || doc.causeSlugs.includes(filters.cause))
+    && (!filters.tag || doc.tags.includes(filters.tag));
+}
+
+function facet(pairs: [string, string][]): Facet[] {
+  const byValue = new Map<string, Facet>();
+  for (const [value, label] of pairs) {
+    const entry = byValue.get(value) ?? { value, label, count: 0 };
+    entry.count++;
+    byValue.set(value, entry);
+  }
+  return [...byValue.values()].sort((a, b) => a.label.localeCompare(b.label));
+}
+
+/** The client-side search over published write-ups: the same code runs in the page and in the tests. */
+export class WriteupIndex {
+  private readonly mini: MiniSearch<SearchDoc>;
+  private readonly byId: Map<number, SearchDoc>;
+  readonly docs: readonly SearchDoc[];
+
+  constructor(docs: readonly SearchDoc[]) {
+    this.docs = docs;
+    this.byId = new Map(docs.map((d) => [d.id, d]));
+    this.mini = new MiniSearch<SearchDoc>({
+      fields: [...FIELDS],
+      storeFields: [],
+      // Array fields (causes, parts, …) are stringified with commas, which the tokenizer splits on.
+      searchOptions: { boost: FIELD_BOOSTS, prefix: true, fuzzy: fuzzyDistance },
+    });
+    this.mini.addAll(docs);
+  }
+
+  get size(): number {
+    return this.docs.length;
+  }
+
+  /**
+   * Results as you type. Every word must match (prefix or near miss); when that finds nothing,
+   * any word may. An empty query lists the filtered write-ups, newest first.
+   */
+  search(query: string, filters: SearchFilters = {}, limit = 50): WriteupHit[] {
+    const filter = (result: { id: number }) => {
+      const doc = this.byId.get(result.id);
+      return !!doc && matchesFilters(doc, filters);
+    };
+    if (!query.trim()) {
+      return this.docs
+        .filter((doc) => matchesFilters(doc, filters))
+        .sort((a, b) => (b.publishedAt ?? "").localeCompare(a.publishedAt ?? ""))
+        .slice(0, limit)
+        .map((doc) => ({ doc, score: 0, terms: [], fields: [] }));
+    }
+    let results = this.mini.search(query, { combineWith: "AND", filter });
+    if (results.length === 0) results = this.mini.search(query, { combineWith: "OR", filter });
+    return results.slice(0, limit).map((r) => ({
+      doc: this.byId.get(r.id)!,
+      score: r.score,
+      terms: r.terms,
+      fields: [...new Set(Object.values(r.match).flat())],
+    }));
+  }
+
+  /** How many write-ups there are for each motor family, cause and tag: the filter choices. */
+  facets(): { families: Facet[]; causes: Facet[]; tags: Facet[] } {
+    return {
+      families: facet(this.docs.flatMap((d) => d.familySlugs.map((s, i): [string, string] => [s, d.families[i] ?? s]))),
+      causes: facet(this.docs.flatMap((d) => d.causeSlugs.map((s, i): [string, string] => [s, d.causes[i] ?? s]))),
+      tags: facet(this.docs.flatMap((d) => d.tags.map((t): [string, string] => [t, t]))),
+    };
+  }
+}
