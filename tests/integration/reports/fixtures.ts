@@ -9,7 +9,15 @@ export interface DemoIds {
   cause: (slug: string) => number;
   part: (slug: string) => number;
   /** The published version of a tree, with a (node, option) pair to write steps with. */
-  version: (treeSlug: string) => { id: number; nodeId: number; optionId: number };
+  version: (treeSlug: string) => VersionIds;
+}
+
+export interface VersionIds {
+  id: number;
+  nodeId: number;
+  optionId: number;
+  /** Option key → its node's id and its own id. */
+  option: (key: string) => { nodeId: number; optionId: number };
 }
 
 export async function demoIds(): Promise<DemoIds> {
@@ -19,11 +27,17 @@ export async function demoIds(): Promise<DemoIds> {
     db.select({ id: parts.id, slug: parts.slug }).from(parts),
     db.select({ id: treeVersions.id, slug: trees.slug }).from(treeVersions).innerJoin(trees, eq(trees.id, treeVersions.treeId)).where(eq(treeVersions.state, "published")),
   ]);
-  const versions = new Map<string, { id: number; nodeId: number; optionId: number }>();
+  const versions = new Map<string, VersionIds>();
   for (const v of versionRows) {
     const graph = (await loadGraph(v.id))!;
-    const option = graph.options.find((o) => o.fromKey === graph.rootKey)!;
-    versions.set(v.slug, { id: v.id, nodeId: graph.nodes.find((n) => n.key === graph.rootKey)!.id, optionId: option.id });
+    const nodeIdOf = new Map(graph.nodes.map((n) => [n.key, n.id]));
+    const option = (key: string) => {
+      const o = graph.options.find((x) => x.key === key);
+      if (!o) throw new Error(`no option ${key} in ${v.slug}`);
+      return { nodeId: nodeIdOf.get(o.fromKey)!, optionId: o.id };
+    };
+    const first = graph.options.find((o) => o.fromKey === graph.rootKey)!;
+    versions.set(v.slug, { id: v.id, ...option(first.key), option });
   }
   const get = <T>(map: Map<string, T>, what: string) => (key: string): T => {
     const value = map.get(key);
@@ -51,6 +65,8 @@ export interface CaseSpec {
   ranking?: Record<string, number> | null;
   /** Write one triage step (default true); imported records have none. */
   steps?: boolean;
+  /** The triage answers as option keys, in order (instead of the one default step). */
+  answers?: string[];
   serial?: string;
   repeatOf?: number | null;
   reference?: string;
@@ -86,9 +102,12 @@ export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<numb
     }
     const partRows = group.flatMap((s, i) => (s.parts ?? []).map((p) => ({ caseId: caseIds[i], partId: ids.part(p.slug), quantity: p.quantity })));
     if (partRows.length) await db.insert(outcomeParts).values(partRows);
-    const stepRows = group.flatMap((s, i) => (s.steps === false ? [] : [{
-      caseId: caseIds[i], seq: 1, nodeId: ids.version(s.tree).nodeId, optionId: ids.version(s.tree).optionId, ranking: {},
-    }]));
+    const stepRows = group.flatMap((s, i) => {
+      if (s.steps === false) return [];
+      const v = ids.version(s.tree);
+      const answers = s.answers?.map((key) => v.option(key)) ?? [{ nodeId: v.nodeId, optionId: v.optionId }];
+      return answers.map((a, seq) => ({ caseId: caseIds[i], seq: seq + 1, ...a, ranking: {} }));
+    });
     if (stepRows.length) await db.insert(caseSteps).values(stepRows);
   }
   return out;
