@@ -1,0 +1,48 @@
+import "server-only";
+import { sql as pg } from "@/db";
+import type { ClosedCase } from "@/lib/diagnosis";
+
+const BATCH = 5000;
+
+/**
+ * The closed cases walked on one tree version, as the engine learns from them: the answers in
+ * step order (node and option keys) and the primary confirmed catalogue cause. Cases without steps
+ * (imported records) and "other" outcomes say nothing about the tree's causes and are left out.
+ */
+export async function closedCasesOf(versionId: number): Promise<ClosedCase[]> {
+  const out: ClosedCase[] = [];
+  let current: { id: number; c: ClosedCase } | null = null;
+  const cursor = pg<{ caseId: number; node: string; option: string; cause: string }[]>`
+    select s.case_id as "caseId", n.key as node, o.key as option, ca.slug as cause
+    from cases c
+    join outcome_causes oc on oc.case_id = c.id and oc.is_primary
+    join causes ca on ca.id = oc.cause_id
+    join case_steps s on s.case_id = c.id
+    join tree_nodes n on n.id = s.node_id
+    join tree_options o on o.id = s.option_id
+    where c.tree_version_id = ${versionId} and c.status = 'closed'
+    order by s.case_id, s.seq`.cursor(BATCH);
+  for await (const rows of cursor) {
+    for (const r of rows) {
+      if (!current || current.id !== r.caseId) {
+        current = { id: r.caseId, c: { answers: [], confirmedCauseId: r.cause } };
+        out.push(current.c);
+      }
+      current.c.answers.push({ nodeId: r.node, optionId: r.option });
+    }
+  }
+  return out;
+}
+
+export interface ClosedStamp {
+  closed: number;
+  latest: string | null;
+}
+
+/** How many closed cases a version has and when the last one closed: what a cached result depends on. */
+export async function closedStampOf(versionId: number): Promise<ClosedStamp> {
+  const [row] = await pg<ClosedStamp[]>`
+    select count(*)::int as closed, max(closed_at)::text as latest
+    from cases where tree_version_id = ${versionId} and status = 'closed'`;
+  return row;
+}

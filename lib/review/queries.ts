@@ -1,0 +1,72 @@
+import "server-only";
+import { and, desc, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { trees, treeVersions, type LIKELIHOOD_MODES } from "@/db/schema";
+import type { Strength } from "@/lib/diagnosis";
+import { loadGraph } from "@/lib/trees/graph";
+import { reviewVersion } from "./review";
+import type { SuggestionView, VersionReview } from "./types";
+
+export type LikelihoodMode = (typeof LIKELIHOOD_MODES)[number];
+
+export interface DraftMark {
+  /** The draft's strength for this answer and cause; null when the draft has no such answer. */
+  draftStrength: Strength | null;
+}
+
+export interface TreeReview {
+  treeId: number;
+  title: string;
+  likelihoodMode: LikelihoodMode;
+  published: VersionReview | null;
+  draft: { versionId: number; number: number } | null;
+  suggestions: (SuggestionView & DraftMark)[];
+}
+
+async function latestVersions(treeId: number) {
+  const rows = await db
+    .select({ id: treeVersions.id, number: treeVersions.number, state: treeVersions.state })
+    .from(treeVersions)
+    .where(eq(treeVersions.treeId, treeId))
+    .orderBy(desc(treeVersions.number));
+  return { published: rows.find((v) => v.state === "published") ?? null, draft: rows.find((v) => v.state === "draft") ?? null };
+}
+
+/** Evidence review of a tree: suggestions learned on its latest published version, checked against its draft. */
+export async function treeReview(treeId: number): Promise<TreeReview | null> {
+  const [tree] = await db.select({ id: trees.id, title: trees.title, mode: trees.likelihoodMode }).from(trees).where(eq(trees.id, treeId)).limit(1);
+  if (!tree) return null;
+  const { published, draft } = await latestVersions(treeId);
+  const review = published ? await reviewVersion(published.id) : null;
+  const draftGraph = draft && review?.suggestions.length ? await loadGraph(draft.id) : null;
+  const suggestions = (review?.suggestions ?? []).map((s) => {
+    if (!draftGraph) return { ...s, draftStrength: s.currentStrength };
+    const option = draftGraph.options.find((o) => o.key === s.optionKey);
+    return { ...s, draftStrength: option ? option.evidence[s.causeSlug] ?? "neutral" : null };
+  });
+  return {
+    treeId: tree.id, title: tree.title, likelihoodMode: tree.mode, published: review,
+    draft: draft ? { versionId: draft.id, number: draft.number } : null, suggestions,
+  };
+}
+
+export interface DigestItem extends SuggestionView {
+  treeTitle: string;
+}
+
+/** The largest open suggestions across all trees in use, for the senior mechanic's home. */
+export async function reviewDigest(limit = 5): Promise<{ items: DigestItem[]; total: number }> {
+  const rows = await db
+    .select({ treeId: trees.id, title: trees.title, versionId: treeVersions.id })
+    .from(trees)
+    .innerJoin(treeVersions, and(eq(treeVersions.treeId, trees.id), eq(treeVersions.state, "published")))
+    .where(eq(trees.archived, false))
+    .orderBy(trees.id, desc(treeVersions.number));
+  const latest = new Map<number, { title: string; versionId: number }>();
+  for (const r of rows) if (!latest.has(r.treeId)) latest.set(r.treeId, { title: r.title, versionId: r.versionId });
+  const reviews = await Promise.all([...latest.values()].map(async (t) => ({ title: t.title, review: await reviewVersion(t.versionId) })));
+  const all = reviews.flatMap(({ title, review }) =>
+    review.suggestions.filter((s) => s.proposedStrength !== s.currentStrength).map((s) => ({ ...s, treeTitle: title })));
+  all.sort((a, b) => Math.abs(b.learned - b.authored) - Math.abs(a.learned - a.authored) || b.cases - a.cases);
+  return { items: all.slice(0, limit), total: all.length };
+}
