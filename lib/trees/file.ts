@@ -1,4 +1,4 @@
-import type { TreeFile } from "@/lib/content/tree-file";
+import type { TreeFile, TreeFileNode } from "@/lib/content/tree-file";
 import type { GraphInput } from "./graph-types";
 
 /** A parsed tree file (our import/export format) as the graph a draft stores. */
@@ -20,6 +20,44 @@ export function treeFileToGraphInput(file: TreeFile): GraphInput {
     })),
     options: file.options.map((o) => ({
       key: o.key, fromKey: o.from, toKey: o.to, label: o.label, dontKnow: o.dontKnow, evidence: { ...o.evidence },
+    })),
+  };
+}
+
+export interface TreeFileMeta {
+  slug: string;
+  symptom: string;
+  title: string;
+  description: string;
+  scope: string[];
+}
+
+/** A stored graph as a tree file (the export format); parsing the result gives the same graph back. */
+export function graphToTreeFile(meta: TreeFileMeta, graph: GraphInput): TreeFile {
+  return {
+    format: "rootbench-tree",
+    formatVersion: 1,
+    slug: meta.slug,
+    symptom: meta.symptom,
+    title: meta.title,
+    description: meta.description,
+    scope: [...meta.scope],
+    rootKey: graph.rootKey ?? "",
+    causes: graph.causes.map((c) => ({ cause: c.slug, priorWeight: c.priorWeight })),
+    nodes: graph.nodes.map((n): TreeFileNode => {
+      const base = { key: n.key, title: n.title, prompt: n.prompt, position: { x: n.posX, y: n.posY } };
+      switch (n.kind) {
+        case "question":
+        case "check":
+          return { ...base, kind: n.kind, costMinutes: n.costMinutes, needsOpening: n.needsOpening };
+        case "cause":
+          return { ...base, kind: "cause", cause: n.causeSlug ?? "" };
+        case "caution":
+          return { ...base, kind: "caution", caution: n.cautionText };
+      }
+    }),
+    options: graph.options.map((o) => ({
+      key: o.key, from: o.fromKey, to: o.toKey, label: o.label, dontKnow: o.dontKnow, evidence: { ...o.evidence },
     })),
   };
 }

@@ -2,11 +2,11 @@ import "server-only";
 import { asc, eq, inArray } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/db";
 import { causes, optionEvidence, treeCauses, treeNodes, treeOptions, treeVersions } from "@/db/schema";
-import type { DxTree } from "@/lib/diagnosis";
 import { AppError } from "@/lib/errors";
 import type { GraphInput, GraphNode, GraphOption, TreeGraph } from "./graph-types";
 
 export type { GraphInput, TreeGraph };
+export { toDxTree } from "./dx";
 
 /** Loads one version's graph: nodes, options (in tree order) with their evidence, and causes. */
 export async function loadGraph(versionId: number, conn: Db | Tx = db): Promise<TreeGraph | null> {
@@ -52,20 +52,6 @@ export async function loadGraph(versionId: number, conn: Db | Tx = db): Promise<
   return {
     versionId: version.id, treeId: version.treeId, number: version.number, state: version.state, rootKey: version.rootKey,
     revision: version.revision, causes: causeRows, nodes, options,
-  };
-}
-
-/** The engine's view of a graph: keys for nodes and options, slugs for causes. */
-export function toDxTree(graph: Pick<TreeGraph, "rootKey" | "causes" | "nodes" | "options">): DxTree {
-  return {
-    rootId: graph.rootKey ?? "",
-    nodes: graph.nodes.map((n) => ({
-      id: n.key, kind: n.kind, ...(n.causeSlug ? { causeId: n.causeSlug } : {}), costMinutes: n.costMinutes,
-    })),
-    options: graph.options.map((o) => ({
-      id: o.key, nodeId: o.fromKey, to: o.toKey, label: o.label, dontKnow: o.dontKnow, evidence: { ...o.evidence },
-    })),
-    causes: graph.causes.map((c) => ({ id: c.slug, priorWeight: c.priorWeight, inspectMinutes: c.inspectMinutes })),
   };
 }
 
