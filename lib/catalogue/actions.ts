@@ -5,7 +5,8 @@ import { db } from "@/db";
 import { CAUSE_AREAS, causeParts, causes, parts, type CauseArea } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { slugSchema } from "@/lib/content/tree-file";
-import { AppError, pgErrorCode } from "@/lib/errors";
+import { AppError } from "@/lib/errors";
+import { sqlState } from "@/lib/trees/sql-state";
 
 const whole = (what: string, min: number, max: number) =>
   z.coerce.number({ error: `Enter the ${what} in whole minutes.` }).int(`Enter the ${what} in whole minutes.`)
@@ -95,7 +96,7 @@ export const saveCauseAction = defineAction({
       });
       return { ok: true as const, data: { slug }, message: editing ? `Saved "${input.name}".` : `Added "${input.name}" to the catalogue.` };
     } catch (error) {
-      if (pgErrorCode(error) === "23505") throw new AppError("conflict", "Another cause already uses that slug.", { fieldErrors: { slug: "Already in use." } });
+      if (sqlState(error) === "23505") throw new AppError("conflict", "Another cause already uses that slug.", { fieldErrors: { slug: "Already in use." } });
       throw error;
     }
   },

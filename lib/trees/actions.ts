@@ -6,7 +6,8 @@ import { motorFamilies, trees, treeScope, treeVersions, users } from "@/db/schem
 import { defineAction } from "@/lib/actions/define";
 import { slugSchema } from "@/lib/content/tree-file";
 import { causeOptions } from "@/lib/catalogue/queries";
-import { AppError, pgErrorCode } from "@/lib/errors";
+import { AppError } from "@/lib/errors";
+import { sqlState } from "@/lib/trees/sql-state";
 import { staleDraftMessage } from "./conflict";
 import { draftGraphSchema, emptyDraft, graphToDraft } from "./draft";
 import { loadGraph, writeGraph } from "./graph";
@@ -72,7 +73,7 @@ export const createTreeAction = defineAction({
       });
       return { ok: true as const, data: created, message: "Tree created; its first draft is open." };
     } catch (error) {
-      if (pgErrorCode(error) === "23505") throw new AppError("conflict", "Another tree already uses that slug.", { fieldErrors: { slug: "Already in use." } });
+      if (sqlState(error) === "23505") throw new AppError("conflict", "Another tree already uses that slug.", { fieldErrors: { slug: "Already in use." } });
       throw error;
     }
   },
@@ -201,7 +202,7 @@ export const startDraftAction = defineAction({
       });
       return { ok: true as const, data: draft, message: draft.existed ? `Draft ${draft.number} was already open.` : `Draft ${draft.number} started.` };
     } catch (error) {
-      if (pgErrorCode(error) === "23505") throw new AppError("conflict", "Someone else started a draft of this tree a moment ago; reload to open it.");
+      if (sqlState(error) === "23505") throw new AppError("conflict", "Someone else started a draft of this tree a moment ago; reload to open it.");
       throw error;
     }
   },
@@ -222,7 +223,7 @@ export const discardDraftAction = defineAction({
       if (!other) await tx.delete(trees).where(eq(trees.id, tree.id));
       return { treeId: tree.id, treeRemoved: !other };
     }).catch((error: unknown) => {
-      if (pgErrorCode(error) === "23503") throw new AppError("conflict", "Cases refer to this draft, so it cannot be discarded.");
+      if (sqlState(error) === "23503") throw new AppError("conflict", "Cases refer to this draft, so it cannot be discarded.");
       throw error;
     });
     return { ok: true as const, data: result, message: result.treeRemoved ? "Draft and its new tree discarded." : "Draft discarded." };

@@ -4,7 +4,8 @@ import { z } from "zod";
 import { db } from "@/db";
 import { causes, motorFamilies, trees, treeScope, treeVersions } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
-import { AppError, pgErrorCode } from "@/lib/errors";
+import { AppError } from "@/lib/errors";
+import { sqlState } from "@/lib/trees/sql-state";
 import { parseTreeFileText, TREE_FILE_MAX_BYTES, type FileProblem, type TreeFile } from "@/lib/validation/tree-file";
 import { treeFileToGraphInput } from "./file";
 import { writeGraph } from "./graph";
@@ -112,7 +113,7 @@ export const importTreeAction = defineAction({
         message: result.created ? `Imported "${file.title}" as a new tree.` : `Imported as draft ${result.number} of the existing tree; its details were kept.`,
       };
     } catch (error) {
-      if (pgErrorCode(error) === "23505") throw new AppError("conflict", "Someone created a tree or draft with this slug a moment ago; try again.");
+      if (sqlState(error) === "23505") throw new AppError("conflict", "Someone created a tree or draft with this slug a moment ago; try again.");
       throw error;
     }
   },
