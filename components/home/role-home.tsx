@@ -5,6 +5,7 @@ import { draftWriteups, openCases, recentWriteups, shopCounts } from "@/lib/home
 import { CaseList } from "./case-list";
 import { WriteupList } from "./writeup-list";
 import { EmptyState } from "@/components/ui/empty-state";
+import { WaitingForUnitPanel } from "@/components/cases/waiting-for-unit";
 
 /** One home per role: what that person opens Rootbench for first. */
 export async function RoleHome({ user }: { user: SessionUser }) {
@@ -28,6 +29,7 @@ async function TechHome({ user }: { user: SessionUser }) {
   return (
     <div className="grid gap-6 md:grid-cols-2">
       <Panel title="Your open cases"><CaseList items={mine} empty="No open cases on your name." /></Panel>
+      <WaitingForUnitPanel />
       <Panel title="Recent write-ups"><WriteupList items={writeups} /></Panel>
     </div>
   );

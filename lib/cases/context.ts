@@ -2,6 +2,7 @@ import "server-only";
 import { sql } from "@/db";
 import type { CaseStatus } from "@/db/schema";
 import type { DxSettings } from "@/lib/diagnosis";
+import { learnedLikelihoodsFor } from "@/lib/review/learned";
 import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
 
 export interface CaseContext {
@@ -24,12 +25,13 @@ interface Row {
   steps: [number, number, number, number][];
   history: Record<string, number>;
   settings: unknown;
+  likelihood_mode: string;
 }
 
 /**
  * Everything an answer needs from the database, in one round trip: the case, its steps, the
  * shop's settings and the confirmed history for the case's motor family — counts of outcome
- * causes of closed cases, by cause slug (the priors' n_k, DESIGN §4).
+ * causes of closed cases, by cause slug (the priors' n_k, DESIGN §4) — and the tree's likelihood setting.
  */
 export async function loadCaseContext(caseId: number): Promise<CaseContext | null> {
   const rows = await sql<Row[]>`
@@ -43,10 +45,14 @@ export async function loadCaseContext(caseId: number): Promise<CaseContext | nul
                   join causes k on k.id = oc.cause_id
                   where hc.family_id = c.family_id and hc.status = 'closed'
                   group by k.slug) h), '{}'::json) as history,
-      (select value from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) as settings
+      (select value from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) as settings,
+      (select t.likelihood_mode from tree_versions v join trees t on t.id = v.tree_id where v.id = c.tree_version_id) as likelihood_mode
     from cases c where c.id = ${caseId}`;
   const row = rows[0];
   if (!row) return null;
+  const settings = dxSettingsFor(row.settings, row.history);
+  // A tree set to "learned" scores with likelihoods learned from closed cases (lib/review, cached there).
+  if (row.likelihood_mode === "learned") settings.likelihoods = await learnedLikelihoodsFor(row.tree_version_id);
   return {
     id: row.id,
     reference: row.reference,
@@ -54,6 +60,6 @@ export async function loadCaseContext(caseId: number): Promise<CaseContext | nul
     familyId: row.family_id,
     treeVersionId: row.tree_version_id,
     steps: row.steps.map(([id, seq, nodeId, optionId]) => ({ id, seq, nodeId, optionId })),
-    settings: dxSettingsFor(row.settings, row.history),
+    settings,
   };
 }

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { CALLER_KINDS, RIDING_USES } from "@/db/schema";
 import { SEND_KINDS } from "./shipping";
 
-const id = (what: string) => z.coerce.number({ error: `No ${what} given.` }).int(`No ${what} given.`).positive(`No ${what} given.`);
+const id = (message: string) => z.coerce.number({ error: message }).int(message).positive(message);
 
 // Digits with the usual separators; 6 to 15 digits (the E.164 maximum), an optional leading +.
 const PHONE = /^\+?[0-9][0-9 ()./-]*$/;
@@ -20,10 +20,10 @@ export const startCaseInput = z.object({
   callerKind: z.enum(CALLER_KINDS, { error: "Rider or dealer?" }),
   phone,
   email,
-  familyId: id("motor family"),
+  familyId: id("Pick the motor family."),
   serial: z.string().trim().max(40, "Serial numbers here are at most 40 characters.").default(""),
   ridingUse: z.enum(RIDING_USES, { error: "Pick how the bike is ridden." }),
-  treeVersionId: id("tree"),
+  treeVersionId: id("Pick the symptom the caller reports."),
   callerWords: z.string().trim().max(2000, "Keep the caller's words under 2,000 characters.").default(""),
 }).superRefine((v, ctx) => {
   if (!v.phone && !v.email) {
@@ -32,22 +32,22 @@ export const startCaseInput = z.object({
 });
 export type StartCaseInput = z.infer<typeof startCaseInput>;
 
-export const answerInput = z.object({ caseId: id("case"), nodeId: id("question"), optionId: id("answer") });
+export const answerInput = z.object({ caseId: id("No case given."), nodeId: id("No question given."), optionId: id("No answer given.") });
 export type AnswerInput = z.infer<typeof answerInput>;
 
-export const undoInput = z.object({ caseId: id("case"), seq: id("step") });
+export const undoInput = z.object({ caseId: id("No case given."), seq: id("No step given.") });
 
-export const notesInput = z.object({ caseId: id("case"), notes: z.string().max(20000, "Notes are limited to 20,000 characters.") });
+export const notesInput = z.object({ caseId: id("No case given."), notes: z.string().max(20000, "Notes are limited to 20,000 characters.") });
 
 export const finishInput = z.discriminatedUnion("outcome", [
   z.object({
     outcome: z.literal("advised"),
-    caseId: id("case"),
+    caseId: id("No case given."),
     advice: z.string().trim().min(1, "Write down what you advised.").max(4000, "Keep the advice under 4,000 characters."),
   }),
   z.object({
     outcome: z.literal("booked_in"),
-    caseId: id("case"),
+    caseId: id("No case given."),
     send: z.enum(SEND_KINDS, { error: "Say what the caller must send." }),
     advice: z.string().trim().max(4000, "Keep the note under 4,000 characters.").default(""),
   }),

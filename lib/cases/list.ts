@@ -2,7 +2,8 @@ import "server-only";
 import { and, asc, desc, eq, gte, ilike, lt, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { cases, motorFamilies, users } from "@/db/schema";
-import type { CaseListPage, CaseListQuery, CaseSort } from "./list-query";
+import type { CaseListPage, CaseSort } from "./cases-key";
+import type { CaseListQuery } from "./list-query";
 
 const likely = sql<string | null>`(select k.name from jsonb_each_text(${cases.finalRanking}) r join causes k on k.slug = r.key
   where r.key <> 'unlisted' order by r.value::float8 desc limit 1)`;

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray, max } from "drizzle-orm";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { caseEvents, cases, caseSteps, motorFamilies, motorMakers, trees, treeScope, treeVersions, users } from "@/db/schema";
 
@@ -27,14 +27,14 @@ export interface TreeChoice {
 
 /** The newest published version of every tree in use, with the families it is scoped to. */
 export async function treeChoices(): Promise<TreeChoice[]> {
-  const newest = db.select({ treeId: treeVersions.treeId, number: max(treeVersions.number).as("number") })
-    .from(treeVersions).where(eq(treeVersions.state, "published")).groupBy(treeVersions.treeId).as("newest");
-  const rows = await db.select({ versionId: treeVersions.id, treeId: trees.id, symptom: trees.symptom, title: trees.title, description: trees.description })
-    .from(newest)
-    .innerJoin(treeVersions, and(eq(treeVersions.treeId, newest.treeId), eq(treeVersions.number, newest.number)))
-    .innerJoin(trees, eq(trees.id, newest.treeId))
-    .where(eq(trees.archived, false))
-    .orderBy(asc(trees.symptom));
+  const rows = await db.selectDistinctOn([treeVersions.treeId], {
+    versionId: treeVersions.id, treeId: trees.id, symptom: trees.symptom, title: trees.title, description: trees.description,
+  })
+    .from(treeVersions)
+    .innerJoin(trees, eq(trees.id, treeVersions.treeId))
+    .where(and(eq(treeVersions.state, "published"), eq(trees.archived, false)))
+    .orderBy(treeVersions.treeId, desc(treeVersions.number));
+  rows.sort((a, b) => a.symptom.localeCompare(b.symptom));
   const scope = rows.length ? await db.select().from(treeScope).where(inArray(treeScope.treeId, rows.map((r) => r.treeId))) : [];
   return rows.map((r) => ({ ...r, familyIds: scope.filter((s) => s.treeId === r.treeId).map((s) => s.familyId) }));
 }

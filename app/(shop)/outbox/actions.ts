@@ -6,6 +6,6 @@ import { retryMailAction } from "@/lib/mail/actions";
 
 export async function retryMail(_prev: ActionState<{ id: number }>, form: FormData): Promise<ActionState<{ id: number }>> {
   const result = await runAction(retryMailAction, form);
-  if (result.ok) revalidatePath("/outbox");
+  if (result.ok) revalidatePath("/outbox", "layout");
   return result;
 }

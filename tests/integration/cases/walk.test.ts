@@ -1,11 +1,12 @@
 import { asc, eq } from "drizzle-orm";
 import { beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { cases, caseSteps, causes, outcomeCauses } from "@/db/schema";
+import { cases, caseSteps, causes, outcomeCauses, trees, treeVersions } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { answerStepAction } from "@/lib/cases/answer";
 import type { StoredRanking } from "@/lib/cases/ranking-types";
 import { undoStepAction } from "@/lib/cases/undo";
+import { learnedLikelihoodsFor } from "@/lib/review/learned";
 import { rankNextQuestions, scoreCauses, suggestConclusion, type DxAnswer } from "@/lib/diagnosis";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import { countRows, createUser, db } from "../../support/db";
@@ -100,6 +101,20 @@ describe("walking a case through a seeded tree", () => {
     const without = scoreCauses(dx, [{ nodeId: "q-what", optionId: q.optionKey }], {});
     expect(result.data.ranking.causes).toEqual(withHistory.causes);
     expect(result.data.ranking.causes).not.toEqual(without.causes);
+  });
+
+  it("a tree set to learned likelihoods scores with what lib/review learned from closed cases", async () => {
+    const [version] = await db.select({ treeId: treeVersions.treeId }).from(treeVersions).where(eq(treeVersions.id, versionId));
+    await db.update(trees).set({ likelihoodMode: "learned" }).where(eq(trees.id, version.treeId));
+    try {
+      const answers = await walk(2);
+      const dx = toDxTree((await loadGraph(versionId))!);
+      const likelihoods = await learnedLikelihoodsFor(versionId);
+      const last = (await stepsOf(caseId)).at(-1)!.ranking as StoredRanking;
+      expect(last.causes).toEqual(scoreCauses(dx, answers, { history, likelihoods }).causes);
+    } finally {
+      await db.update(trees).set({ likelihoodMode: "authored" }).where(eq(trees.id, version.treeId));
+    }
   });
 
   it("undo removes exactly the last step and returns the ranking shown before it", async () => {

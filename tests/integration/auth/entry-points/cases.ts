@@ -32,5 +32,9 @@ export const rows: EntryPointRows = {
   ],
   routes: [
     { file: "app/api/cases/route.ts", method: "GET", path: "/api/cases?status=open&limit=10", allowed: STAFF },
+    {
+      file: "app/api/cases/[id]/steps/route.ts", method: "POST", path: "/api/cases/1/steps", allowed: WORKERS,
+      params: { id: "1" }, body: { nodeId: 1, optionId: 1 },
+    },
   ],
 };

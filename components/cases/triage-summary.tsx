@@ -1,0 +1,34 @@
+import type { Case } from "@/db/schema";
+import { formatEuro } from "@/lib/cases/quote";
+
+const pct = (p: number) => `${Math.round(p * 100)} %`;
+
+/** What the triage ended with: the final ranking, the quote, the bench plan and what was asked for. */
+export function TriageSummary({ kase, nameOf }: { kase: Case; nameOf: (slug: string) => string }) {
+  const ranking = Object.entries(kase.finalRanking ?? {}).filter(([k]) => k !== "unlisted").sort((a, b) => b[1] - a[1]).slice(0, 4);
+  return (
+    <div className="grid gap-4 text-sm md:grid-cols-3" data-testid="triage-summary">
+      <div>
+        <p className="font-medium">Ranking at the end of the call</p>
+        <ul>
+          {ranking.map(([slug, p]) => <li key={slug} className="flex justify-between gap-2"><span>{nameOf(slug)}</span><span className="font-mono">{pct(p)}</span></li>)}
+          <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="font-mono">{pct(kase.finalRanking?.unlisted ?? 0)}</span></li>
+        </ul>
+      </div>
+      <div>
+        <p className="font-medium">Rough quote</p>
+        <p>{kase.quoteLowCents !== null && kase.quoteHighCents !== null ? `${formatEuro(kase.quoteLowCents)} – ${formatEuro(kase.quoteHighCents)}` : "none (advised by phone)"}</p>
+        {kase.whatToSend ? <><p className="mt-2 font-medium">What to send</p><p className="text-ink-soft">{kase.whatToSend}</p></> : null}
+      </div>
+      <div>
+        <p className="font-medium">Bench plan</p>
+        {kase.benchPlan ? (
+          <>
+            <ol className="list-decimal pl-5">{kase.benchPlan.order.slice(0, 5).map((slug) => <li key={slug}>{nameOf(slug)}</li>)}</ol>
+            <p className="text-ink-soft">Expected teardown about {Math.round(kase.benchPlan.expectedMinutes)} min.</p>
+          </>
+        ) : <p className="text-ink-soft">None.</p>}
+      </div>
+    </div>
+  );
+}

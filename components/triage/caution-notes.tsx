@@ -1,0 +1,16 @@
+import type { ViewNode } from "@/lib/cases/walk-view";
+
+/** Caution nodes the walk has passed: their text is read to the caller or followed at the bench. */
+export function CautionNotes({ cautions }: { cautions: ViewNode[] }) {
+  if (cautions.length === 0) return null;
+  return (
+    <ul className="flex flex-col gap-2" data-testid="cautions">
+      {cautions.map((c) => (
+        <li key={c.key} role="note" className="rounded-lg border-l-4 border-amber bg-amber-light p-4">
+          <p className="font-semibold">{c.title}</p>
+          <p className="mt-1 text-ink">{c.cautionText}</p>
+        </li>
+      ))}
+    </ul>
+  );
+}
