@@ -4,6 +4,7 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { signOut } from "@/app/(auth)/sign-in/actions";
 import { NAV_ITEMS } from "./nav-items";
 import { NavLink } from "./nav-link";
+import { HeaderSearch } from "@/components/search/header-search";
 
 export function AppHeader({ user }: { user: SessionUser }) {
   const items = NAV_ITEMS.filter((item) => may(user.role, item.capability));
@@ -17,6 +18,7 @@ export function AppHeader({ user }: { user: SessionUser }) {
         <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
           {items.map((item) => <NavLink key={item.href} href={item.href}>{item.label}</NavLink>)}
         </nav>
+        {may(user.role, "writeup:read") ? <HeaderSearch /> : null}
         <div className="flex items-center gap-3 text-sm">
           <span data-testid="signed-in-as">
             {user.name} · <span className="text-copper-light">{ROLE_LABELS[user.role]}</span>
