@@ -4,6 +4,7 @@ import type { CaseStatus } from "@/db/schema";
 import type { DxSettings } from "@/lib/diagnosis";
 import { learnedLikelihoodsFor } from "@/lib/review/learned";
 import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
+import { familyHistory } from "./history";
 
 export interface CaseContext {
   id: number;
@@ -23,34 +24,26 @@ interface Row {
   family_id: number;
   tree_version_id: number;
   steps: [number, number, number, number][];
-  history: Record<string, number>;
   settings: unknown;
   likelihood_mode: string;
 }
 
 /**
- * Everything an answer needs from the database, in one round trip: the case, its steps, the
- * shop's settings and the confirmed history for the case's motor family — counts of outcome
- * causes of closed cases, by cause slug (the priors' n_k, DESIGN §4) — and the tree's likelihood setting.
+ * Everything an answer needs from the database in one round trip — the case, its steps, the
+ * shop's settings and the tree's likelihood setting — plus the confirmed history of the case's
+ * motor family (see familyHistory, usually cached).
  */
 export async function loadCaseContext(caseId: number): Promise<CaseContext | null> {
   const rows = await sql<Row[]>`
     select c.id, c.reference, c.status, c.family_id, c.tree_version_id,
       coalesce((select json_agg(json_build_array(s.id, s.seq, s.node_id, s.option_id) order by s.seq)
                 from case_steps s where s.case_id = c.id), '[]'::json) as steps,
-      coalesce((select json_object_agg(h.slug, h.n) from (
-                  select k.slug, count(*)::int as n
-                  from outcome_causes oc
-                  join cases hc on hc.id = oc.case_id
-                  join causes k on k.id = oc.cause_id
-                  where hc.family_id = c.family_id and hc.status = 'closed'
-                  group by k.slug) h), '{}'::json) as history,
       (select value from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) as settings,
       (select t.likelihood_mode from tree_versions v join trees t on t.id = v.tree_id where v.id = c.tree_version_id) as likelihood_mode
     from cases c where c.id = ${caseId}`;
   const row = rows[0];
   if (!row) return null;
-  const settings = dxSettingsFor(row.settings, row.history);
+  const settings = dxSettingsFor(row.settings, await familyHistory(row.family_id));
   // A tree set to "learned" scores with likelihoods learned from closed cases (lib/review, cached there).
   if (row.likelihood_mode === "learned") settings.likelihoods = await learnedLikelihoodsFor(row.tree_version_id);
   return {

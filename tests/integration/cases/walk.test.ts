@@ -4,6 +4,7 @@ import { cases, caseSteps, causes, outcomeCauses, trees, treeVersions } from "@/
 import { executeAction } from "@/lib/actions/define";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { answerStepAction } from "@/lib/cases/answer";
+import { forgetFamilyHistory } from "@/lib/cases/history";
 import type { StoredRanking } from "@/lib/cases/ranking-types";
 import { undoStepAction } from "@/lib/cases/undo";
 import { learnedLikelihoodsFor } from "@/lib/review/learned";
@@ -51,6 +52,7 @@ describe("walking a case through a seeded tree", () => {
       { caseId: closed[0], causeId: belt, primary: false }, { caseId: closed[1], causeId: belt, primary: false },
       { caseId: other, causeId: belt },
     ]);
+    forgetFamilyHistory(); // priors are cached for 30 s per process; this test changed them
   });
 
   let caseId: number;
