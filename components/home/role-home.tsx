@@ -5,6 +5,7 @@ import { draftWriteups, openCases, recentWriteups, shopCounts } from "@/lib/home
 import { CaseList } from "./case-list";
 import { WriteupList } from "./writeup-list";
 import { EmptyState } from "@/components/ui/empty-state";
+import { PracticeHistoryPanel } from "@/components/practice/practice-history-panel";
 import { WaitingForUnitPanel } from "@/components/cases/waiting-for-unit";
 
 /** One home per role: what that person opens Rootbench for first. */
@@ -53,7 +54,7 @@ async function TraineeHome() {
   const writeups = await recentWriteups();
   return (
     <div className="grid gap-6 md:grid-cols-2">
-      <Panel title="Practice"><EmptyState title="No practice cases done yet." /></Panel>
+      <PracticeHistoryPanel />
       <Panel title="Recent write-ups"><WriteupList items={writeups} /></Panel>
     </div>
   );
