@@ -1,5 +1,6 @@
 // Local stand-in for a mail server (DESIGN §6): keeps every message, relays none.
 // SMTP on SMTP_PORT (default 2525); JSON control on 127.0.0.1:SMTP_CONTROL_PORT (default SMTP_PORT + 1).
+import { exitWithParents } from "../../lib/mail/exit-with-parents";
 import { startFakeSmtp } from "../../lib/mail/fake-smtp";
 
 const port = Number(process.env.SMTP_PORT ?? 2525);
@@ -11,6 +12,7 @@ startFakeSmtp({ port, controlPort })
     const stop = () => { fake.close().finally(() => process.exit(0)); };
     process.on("SIGTERM", stop);
     process.on("SIGINT", stop);
+    exitWithParents(stop);
   })
   .catch((error: unknown) => {
     console.error("[fake-smtp] could not start:", error);

@@ -4,6 +4,7 @@ import { sql } from "../../db";
 import { deliverDue } from "../../lib/mail/deliver";
 import { smtpConfigFromEnv, smtpTransport } from "../../lib/mail/transport";
 import { loadShop } from "../../lib/cases/shop";
+import { exitWithParents } from "../../lib/mail/exit-with-parents";
 
 const pollMs = Number(process.env.MAIL_POLL_MS ?? 2000);
 let running = true;
@@ -30,6 +31,7 @@ async function main() {
 const stop = () => { running = false; };
 process.on("SIGTERM", stop);
 process.on("SIGINT", stop);
+exitWithParents(() => { stop(); setTimeout(() => process.exit(0), pollMs + 5000).unref(); });
 main().catch((error: unknown) => {
   console.error("[mail-worker] stopped:", error);
   process.exit(1);
