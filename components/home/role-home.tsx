@@ -7,6 +7,7 @@ import { WriteupList } from "./writeup-list";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PracticeHistoryPanel } from "@/components/practice/practice-history-panel";
 import { WaitingForUnitPanel } from "@/components/cases/waiting-for-unit";
+import { TreeDraftsPanel } from "@/components/trees/home-drafts-panel";
 
 /** One home per role: what that person opens Rootbench for first. */
 export async function RoleHome({ user }: { user: SessionUser }) {
@@ -46,6 +47,7 @@ async function SeniorHome({ user }: { user: SessionUser }) {
         )}
       </Panel>
       <Panel title="Your open cases"><CaseList items={mine} empty="No open cases on your name." /></Panel>
+      <TreeDraftsPanel />
     </div>
   );
 }

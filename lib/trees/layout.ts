@@ -28,3 +28,26 @@ export function autoLayout(draft: DraftGraph): Map<string, { x: number; y: numbe
   }
   return out;
 }
+
+const GAP_X = 40;
+const GAP_Y = 48;
+
+/**
+ * The nearest place to `desired` where a new node overlaps none: tried on a grid of node-sized
+ * steps, nearest first, so nodes added one after another sit side by side instead of stacking.
+ */
+export function freeSpot(draft: DraftGraph, desired: { x: number; y: number }): { x: number; y: number } {
+  const clear = (x: number, y: number) =>
+    draft.nodes.every((n) => Math.abs(n.posX - x) >= NODE_WIDTH + 8 || Math.abs(n.posY - y) >= NODE_HEIGHT + 8);
+  const candidates: { x: number; y: number; d: number }[] = [];
+  for (let row = -6; row <= 6; row++) {
+    for (let col = -6; col <= 6; col++) {
+      const x = desired.x + col * (NODE_WIDTH + GAP_X);
+      const y = desired.y + row * (NODE_HEIGHT + GAP_Y);
+      candidates.push({ x, y, d: Math.hypot(col * 1.2, row) });
+    }
+  }
+  candidates.sort((a, b) => a.d - b.d);
+  const spot = candidates.find((c) => clear(c.x, c.y)) ?? candidates[candidates.length - 1];
+  return { x: Math.round(spot.x), y: Math.round(spot.y) };
+}

@@ -17,7 +17,7 @@ import type { DraftGraph } from "@/lib/trees/draft";
 import { draftToDxTree } from "@/lib/trees/dx";
 import { graphToTreeFile } from "@/lib/trees/file";
 import { historyReducer, startHistory } from "@/lib/trees/history";
-import { NODE_HEIGHT, NODE_WIDTH, autoLayout } from "@/lib/trees/layout";
+import { NODE_HEIGHT, NODE_WIDTH, autoLayout, freeSpot } from "@/lib/trees/layout";
 import { addNode, addOption, moveNodes, removeNodes, removeOptions, updateOption } from "@/lib/trees/ops";
 import { treeProblems } from "@/lib/trees/problems";
 import { EditorContext, type EditorApi, type Focus } from "./editor-context";
@@ -186,9 +186,10 @@ function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: Tre
   const [ready, setReady] = useState(false);
   useEffect(() => {
     if (ready || (!initialized && nodes.length > 0)) return;
-    void flow.fitView({ padding: 0.08 }).then(() => {
-      requestAnimationFrame(() => { window.__rbCanvasReady ??= performance.now(); setReady(true); });
-    });
+    const markReady = () => requestAnimationFrame(() => { window.__rbCanvasReady ??= performance.now(); setReady(true); });
+    // fitView waits for measured nodes, so an empty tree is usable at once.
+    if (nodes.length === 0) markReady();
+    else void flow.fitView({ padding: 0.08 }).then(markReady);
   }, [flow, initialized, nodes.length, ready]);
 
   const fit = useCallback(() => { void flow.fitView({ padding: 0.08, duration: 200 }); }, [flow]);
@@ -196,8 +197,7 @@ function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: Tre
   const addAtCentre = useCallback((kind: NodeKind) => {
     const rect = wrapper.current?.getBoundingClientRect();
     const centre = rect ? flow.screenToFlowPosition({ x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 }) : { x: 0, y: 0 };
-    const nudge = (draft.nodes.length % 6) * 24;
-    const r = addNode(draft, kind, { x: centre.x - NODE_WIDTH / 2 + nudge, y: centre.y - NODE_HEIGHT / 2 + nudge });
+    const r = addNode(draft, kind, freeSpot(draft, { x: centre.x - NODE_WIDTH / 2, y: centre.y - NODE_HEIGHT / 2 }));
     edit(() => r.draft);
     setFocus({ type: "node", key: r.key });
   }, [draft, edit, flow, setFocus]);

@@ -16,7 +16,11 @@ export function useCanvasState(draft: DraftGraph, problems: TreeProblem[], cause
   const [nodes, setNodes] = useState<TreeFlowNode[]>(() => reconcileNodes([], draft, problemMap, causeNameOf));
   const [edges, setEdges] = useState<TreeFlowEdge[]>(() => reconcileEdges([], draft, problemOptions));
 
+  // The canvas keeps its own node state (selection, drag positions, measured sizes); when the draft
+  // changes it is merged in, not replaced, so xyflow keeps what it measured.
+  // eslint-disable-next-line react-hooks/set-state-in-effect
   useEffect(() => { setNodes((prev) => reconcileNodes(prev, draft, problemMap, causeNameOf)); }, [draft, problemMap, causeNameOf]);
+  // eslint-disable-next-line react-hooks/set-state-in-effect
   useEffect(() => { setEdges((prev) => reconcileEdges(prev, draft, problemOptions)); }, [draft, problemOptions]);
 
   // Removal goes through the draft (and its undo history), never straight to the canvas.

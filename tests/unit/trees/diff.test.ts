@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { diffGraphs, diffSize } from "@/lib/trees/diff";
+import type { GraphInput } from "@/lib/trees/graph-types";
 import { node, option, smallTree } from "./fixtures";
 
 // Each expectation follows from the edit made to the constructed tree (no published source applies).
@@ -36,7 +37,7 @@ describe("diffGraphs", () => {
 
   it("lists answers added with their evidence, removed answers, and label changes", () => {
     const a = smallTree();
-    const b = {
+    const b: GraphInput = {
       ...a,
       options: [
         { ...a.options[0], label: "Yes, it skips" },
@@ -52,7 +53,7 @@ describe("diffGraphs", () => {
 
   it("treats a missing evidence entry as neutral, so only real strength changes show", () => {
     const a = smallTree();
-    const b = {
+    const b: GraphInput = {
       ...a,
       options: [
         { ...a.options[0], evidence: { "belt-worn": "strong" as const, "gear-teeth-worn": "rules_out" as const } },

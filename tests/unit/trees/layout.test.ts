@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { NODE_HEIGHT, NODE_WIDTH, autoLayout } from "@/lib/trees/layout";
+import { NODE_HEIGHT, NODE_WIDTH, autoLayout, freeSpot } from "@/lib/trees/layout";
 import { treeFileToGraphInput } from "@/lib/trees/file";
 import { content } from "../content/load";
 
@@ -20,5 +20,16 @@ describe("automatic layout", () => {
         }
       }
     }
+  });
+});
+
+describe("placing a new node", () => {
+  it("takes the wanted spot when it is free and the nearest free one when not", () => {
+    const empty = { rootKey: null, causes: [], nodes: [], options: [] };
+    expect(freeSpot(empty, { x: 10, y: 20 })).toEqual({ x: 10, y: 20 });
+    const one = { ...empty, nodes: [{ key: "a", kind: "question" as const, title: "", prompt: "", costMinutes: 1, needsOpening: false, causeSlug: null, cautionText: "", posX: 0, posY: 0 }] };
+    const spot = freeSpot(one, { x: 5, y: 5 });
+    expect(Math.abs(spot.x) >= NODE_WIDTH || Math.abs(spot.y) >= NODE_HEIGHT).toBe(true);
+    expect(Math.hypot(spot.x, spot.y)).toBeLessThan(NODE_WIDTH + 100);
   });
 });
