@@ -10,8 +10,8 @@ const day = (iso: string) => iso.slice(0, 10);
 export const SORTABLE: ReadonlySet<string> = new Set<CaseSort>(["reference", "createdAt", "callerName", "family", "symptom", "status", "technician"]);
 
 export const caseColumns = [
-  col.accessor("reference", { id: "reference", header: "Reference", cell: (c) => <Link href={`/cases/${c.row.original.id}`} className="font-mono">{c.getValue()}</Link> }),
-  col.accessor("createdAt", { id: "createdAt", header: "Started", cell: (c) => day(c.getValue()) }),
+  col.accessor("reference", { id: "reference", header: "Reference", cell: (c) => <Link href={`/cases/${c.row.original.id}`} className="whitespace-nowrap font-mono">{c.getValue()}</Link> }),
+  col.accessor("createdAt", { id: "createdAt", header: "Started", cell: (c) => <span className="whitespace-nowrap">{day(c.getValue())}</span> }),
   col.accessor("callerName", { id: "callerName", header: "Caller", cell: (c) => <>{c.getValue()} <span className="text-xs text-ink-faint">{c.row.original.callerKind}</span></> }),
   col.accessor("familyName", { id: "family", header: "Motor family" }),
   col.accessor("symptom", { id: "symptom", header: "Symptom" }),

@@ -27,7 +27,7 @@ export function CaseFilters({ query, choices, onChange }: {
   const select = (key: keyof CaseTableQuery, label: string, options: { value: string; label: string }[]) => (
     <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
       {label}
-      <select className={input} value={String(query[key] ?? "")} onChange={(e) => onChange({ [key]: e.target.value || undefined })}>
+      <select className={`${input} max-w-52`} value={String(query[key] ?? "")} onChange={(e) => onChange({ [key]: e.target.value || undefined })}>
         <option value="">any</option>
         {options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
       </select>
@@ -35,10 +35,10 @@ export function CaseFilters({ query, choices, onChange }: {
   );
 
   return (
-    <div className="flex flex-wrap items-end gap-3" data-testid="case-filters">
+    <div className="flex flex-wrap items-end gap-2" data-testid="case-filters">
       <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
         Search
-        <input className={input} type="search" placeholder="reference, caller or serial" value={search} onChange={(e) => setSearch(e.target.value)} />
+        <input className={`${input} w-48`} type="search" placeholder="reference, caller or serial" value={search} onChange={(e) => setSearch(e.target.value)} />
       </label>
       {select("status", "Status", Object.entries(STATUS_LABEL).map(([value, label]) => ({ value, label })))}
       {select("family", "Motor family", choices.families.map((f) => ({ value: String(f.id), label: f.label })))}

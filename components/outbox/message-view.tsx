@@ -23,11 +23,10 @@ export function MessageView({ message }: { message: OutboxMessage & { caseRefere
         <pre className="mt-1 whitespace-pre-wrap rounded-md border border-ink-faint/30 bg-paper p-3 font-sans text-sm" data-testid="outbox-text">{message.textBody}</pre>
       </section>
       {message.htmlBody ? (
-        <section>
-          <h3 className="text-sm font-semibold text-ink-soft">HTML version</h3>
-          {/* Sandboxed without scripts: the HTML is ours, escaped when composed, but is shown as inert content anyway. */}
-          <iframe title="HTML version of the message" sandbox="" srcDoc={message.htmlBody} className="mt-1 h-96 w-full rounded-md border border-ink-faint/30 bg-white" />
-        </section>
+        <details>
+          <summary className="cursor-pointer text-sm font-semibold text-ink-soft">HTML version (source)</summary>
+          <pre className="mt-1 max-h-96 overflow-auto whitespace-pre-wrap rounded-md border border-ink-faint/30 bg-white p-3 font-mono text-xs">{message.htmlBody}</pre>
+        </details>
       ) : null}
     </div>
   );

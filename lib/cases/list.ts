@@ -12,7 +12,8 @@ const likelyP = sql<number | null>`(select max(r.value::float8) from jsonb_each_
 const SORT_COLUMN: Record<CaseSort, SQL> = {
   createdAt: sql`${cases.createdAt}`,
   reference: sql`${cases.reference}`,
-  status: sql`${cases.status}`,
+  // Lifecycle order, not alphabetical.
+  status: sql`array_position(array['open', 'advised', 'booked_in', 'on_bench', 'closed'], ${cases.status})`,
   callerName: sql`lower(${cases.callerName})`,
   family: sql`${motorFamilies.name} || ' ' || ${motorFamilies.generation}`,
   symptom: sql`${cases.symptom}`,

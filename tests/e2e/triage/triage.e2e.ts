@@ -88,11 +88,16 @@ describe("phone triage, end to end", () => {
     expect(await walk.topCause()).toBe("owc-cage-broken");
     await shot(page, "triage-walk-after-undo");
 
+    // Notes save on their own shortly after typing stops.
+    await page.getByTestId("case-notes").pressSequentially(" Rider weighs the bike down with a child seat.");
+    await page.getByTestId("notes-status").filter({ hasText: /^Saved at/ }).waitFor();
+
     await walk.bookIn("The drive unit and the battery", "Please add the crank arms.");
     await page.waitForURL(/\/cases\/\d+\?finished=1$/);
     await page.getByTestId("finished-note").waitFor();
     expect(await page.getByTestId("case-status").getAttribute("data-status")).toBe("booked_in");
     expect(await page.getByTestId("case-step").count()).toBe(2);
+    expect(await page.getByTestId("case-notes-view").textContent()).toContain("child seat");
     await shot(page, "triage-case-booked-in");
   });
 
