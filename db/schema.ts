@@ -389,7 +389,12 @@ export const outcomeCauses = pgTable(
     causeId: integer("cause_id").notNull().references(() => causes.id),
     primary: boolean("is_primary").notNull().default(true),
   },
-  (t) => [primaryKey({ columns: [t.caseId, t.causeId] }), index("outcome_causes_cause_idx").on(t.causeId)],
+  (t) => [
+    primaryKey({ columns: [t.caseId, t.causeId] }),
+    index("outcome_causes_cause_idx").on(t.causeId),
+    // At most one primary confirmed cause per case; reports join on it, so it is also their index.
+    uniqueIndex("outcome_causes_one_primary_key").on(t.caseId).where(sql`${t.primary}`),
+  ],
 );
 
 export const outcomeParts = pgTable(

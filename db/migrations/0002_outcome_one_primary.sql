@@ -1,0 +1,1 @@
+CREATE UNIQUE INDEX "outcome_causes_one_primary_key" ON "outcome_causes" USING btree ("case_id") WHERE "outcome_causes"."is_primary";
