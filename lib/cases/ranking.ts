@@ -1,4 +1,4 @@
-import { rankNextQuestions, scoreCauses, suggestConclusion, type DxAnswer, type DxSettings, type DxTree } from "@/lib/diagnosis";
+import { analyseAnswers, type DxAnswer, type DxSettings, type DxTree } from "@/lib/diagnosis";
 import type { StoredRanking } from "./ranking-types";
 
 /** How many next-question suggestions a step keeps; the screen shows the best three not skipped. */
@@ -9,9 +9,8 @@ export const STORED_SUGGESTIONS = 5;
  * browser runs it for the optimistic update and the server for the stored, authoritative copy.
  */
 export function computeRanking(tree: DxTree, answers: DxAnswer[], settings: DxSettings): StoredRanking {
-  const scores = scoreCauses(tree, answers, settings);
-  const suggestions = rankNextQuestions(tree, answers, settings).slice(0, STORED_SUGGESTIONS);
-  const conclusion = suggestConclusion(tree, answers, settings);
+  const { scores, questions, conclusion } = analyseAnswers(tree, answers, settings);
+  const suggestions = questions.slice(0, STORED_SUGGESTIONS);
   return {
     causes: scores.causes.map((c) => ({
       causeId: c.causeId,

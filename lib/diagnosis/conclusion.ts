@@ -1,8 +1,8 @@
 import { effectiveAnswers } from "./answers";
-import { buildModel } from "./model";
+import { buildModel, type Model } from "./model";
 import { rankWithPosterior } from "./next-question";
 import { computePosterior } from "./posterior";
-import type { Conclusion, DxAnswer, DxSettings, DxTree } from "./types";
+import type { Conclusion, DxAnswer, DxSettings, DxTree, RankedQuestion } from "./types";
 
 /**
  * "cause" when the top cause reaches settings.stopThreshold (0.8); "unlisted" when the
@@ -15,6 +15,11 @@ export function suggestConclusion(tree: DxTree, answers: DxAnswer[], settings?: 
   const model = buildModel(tree, settings);
   const resolved = effectiveAnswers(model, answers);
   const { p } = computePosterior(model, resolved);
+  return concludeFrom(tree, model, p, () => rankWithPosterior(model, resolved, p));
+}
+
+/** The stop rule on a computed posterior; `questions` may be passed lazily (only needed below the threshold). */
+export function concludeFrom(tree: DxTree, model: Model, p: Float64Array, questions: RankedQuestion[] | (() => RankedQuestion[])): Conclusion {
   const { stopThreshold, minGainBits } = model.settings;
 
   let top = -1;
@@ -27,7 +32,8 @@ export function suggestConclusion(tree: DxTree, answers: DxAnswer[], settings?: 
   if (causeLeads && topP >= stopThreshold) return { kind: "cause", ...leader };
   if (!causeLeads && unlisted >= stopThreshold) return { kind: "unlisted", ...leader };
 
-  const informative = rankWithPosterior(model, resolved, p).some((q) => q.gainBits > minGainBits);
+  const ranked = typeof questions === "function" ? questions() : questions;
+  const informative = ranked.some((q) => q.gainBits > minGainBits);
   if (!informative) return { kind: causeLeads ? "cause" : "unlisted", ...leader };
   return { kind: "continue", ...leader };
 }

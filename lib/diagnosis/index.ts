@@ -29,6 +29,7 @@ export { scoreCauses } from "./score";
 export { entropyBits, expectedInformationGain } from "./information";
 export { rankNextQuestions } from "./next-question";
 export { suggestConclusion } from "./conclusion";
+export { analyseAnswers, type Analysis } from "./analyse";
 export { benchPlan } from "./bench-plan";
 export { validateTree } from "./validate";
 export { learnLikelihoods } from "./learn";

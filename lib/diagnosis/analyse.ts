@@ -1,0 +1,29 @@
+import { effectiveAnswers } from "./answers";
+import { concludeFrom } from "./conclusion";
+import { buildModel } from "./model";
+import { rankWithPosterior } from "./next-question";
+import { computePosterior } from "./posterior";
+import { scoresFrom } from "./score";
+import type { CauseScores, Conclusion, DxAnswer, DxSettings, DxTree, RankedQuestion } from "./types";
+
+export interface Analysis {
+  scores: CauseScores;
+  questions: RankedQuestion[];
+  conclusion: Conclusion;
+}
+
+/**
+ * scoreCauses, rankNextQuestions and suggestConclusion in one pass: one model, one posterior and
+ * one ranking instead of three of each (the triage answer path calls all three on every answer).
+ */
+export function analyseAnswers(tree: DxTree, answers: DxAnswer[], settings?: DxSettings): Analysis {
+  const model = buildModel(tree, settings);
+  const resolved = effectiveAnswers(model, answers);
+  const posterior = computePosterior(model, resolved);
+  const questions = rankWithPosterior(model, resolved, posterior.p);
+  return {
+    scores: scoresFrom(tree, model, posterior),
+    questions,
+    conclusion: concludeFrom(tree, model, posterior.p, questions),
+  };
+}
