@@ -10,7 +10,7 @@ export function SearchResults({ hits, active, onHover }: { hits: WriteupHit[]; a
   return (
     <ul id="writeup-results" role="listbox" aria-label="Matching write-ups" className="flex flex-col gap-2" data-testid="search-results">
       {hits.map((hit, i) => {
-        const snippet = hit.fields.includes("text") ? snippetAround(hit.doc.text, hit.terms) : null;
+        const snippet = hit.fields.includes("body") ? snippetAround(hit.doc.text, hit.terms) : null;
         return (
           <li
             key={hit.doc.id}
