@@ -24,22 +24,26 @@ export function truthFor(ranking: Record<string, number>, primarySlug: string | 
   return primarySlug && Object.hasOwn(ranking, primarySlug) && primarySlug !== UNLISTED ? primarySlug : UNLISTED;
 }
 
+/** (version, final ranking, primary cause) of the scored cases; exported for the benchmark's EXPLAIN. */
+export function accuracyRowsQuery(scope: ReportScope) {
+  return pg<{ v: number; r: Record<string, number>; truth: string | null }[]>`
+    select c.tree_version_id as v, c.final_ranking as r, ca.slug as truth
+    from cases c
+    left join outcome_causes oc on oc.case_id = c.id and oc.is_primary
+    left join causes ca on ca.id = oc.cause_id
+    where ${inScope(scope)} and c.final_ranking is not null`;
+}
+
 /**
- * Tree accuracy per tree version on the closed cases in scope that were triaged on a tree (cases
- * without steps, such as imported records, are skipped): top-1 / top-3 hit rate of the ranking at
+ * Tree accuracy per tree version on the closed cases in scope that were triaged on a tree, i.e. that
+ * keep the ranking shown at the end of triage (imported records have none and are skipped; a
+ * triage that concluded before any answer still made a prediction and counts): top-1 / top-3 hit rate of the ranking at
  * the end of triage, Brier score, log loss and calibration, all from rankingScores. Only
  * (version, final ranking, primary cause) triples leave Postgres, in batches.
  */
 export async function treeAccuracy(scope: ReportScope): Promise<VersionAccuracy[]> {
   const acc = new Map<number, { scorer: ScoreAccumulator; pending: RankingRow[] }>();
-  const cursor = pg<{ v: number; r: Record<string, number>; truth: string | null }[]>`
-    select c.tree_version_id as v, c.final_ranking as r, ca.slug as truth
-    from cases c
-    left join outcome_causes oc on oc.case_id = c.id and oc.is_primary
-    left join causes ca on ca.id = oc.cause_id
-    where ${inScope(scope)}
-      and c.final_ranking is not null
-      and exists (select 1 from case_steps s where s.case_id = c.id)`.cursor(BATCH);
+  const cursor = accuracyRowsQuery(scope).cursor(BATCH);
   for await (const rows of cursor) {
     for (const row of rows) {
       const entry = acc.get(row.v) ?? { scorer: new ScoreAccumulator(), pending: [] };

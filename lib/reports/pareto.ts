@@ -25,15 +25,20 @@ export interface Pareto {
   rows: ParetoRow[];
 }
 
-/** Primary confirmed cause per closed case in scope, counted in Postgres. */
-export async function causeCounts(scope: ReportScope): Promise<CauseCount[]> {
-  const rows = await pg<{ key: string | null; name: string | null; n: number }[]>`
+/** The GROUP BY behind the Pareto (exported for the benchmark's EXPLAIN). */
+export function causeCountsQuery(scope: ReportScope) {
+  return pg<{ key: string | null; name: string | null; n: number }[]>`
     select ca.slug as key, ca.name, count(*)::int as n
     from cases c
     left join outcome_causes oc on oc.case_id = c.id and oc.is_primary
     left join causes ca on ca.id = oc.cause_id
     where ${inScope(scope)}
     group by ca.slug, ca.name`;
+}
+
+/** Primary confirmed cause per closed case in scope, counted in Postgres. */
+export async function causeCounts(scope: ReportScope): Promise<CauseCount[]> {
+  const rows = await causeCountsQuery(scope);
   return rows.map((r) => ({ key: r.key ?? OTHER_CAUSE, name: r.name ?? OTHER_CAUSE_LABEL, n: r.n }));
 }
 

@@ -18,16 +18,23 @@ export interface PartsDemand {
   byMonth: Record<string, Record<string, number>>;
 }
 
+export function partsDemandQuery(scope: ReportScope) {
+  // Grouped on the truncated timestamp and the part id first; names and month labels join the few result rows.
+  return pg<{ month: string; slug: string; name: string; sku: string; qty: number }[]>`
+    with per_month as (
+      select date_trunc('month', c.closed_at at time zone 'UTC') as m, op.part_id, sum(op.quantity)::int as qty
+      from cases c
+      join outcome_parts op on op.case_id = c.id
+      where ${inScope(scope)}
+      group by 1, 2
+    )
+    select to_char(pm.m, 'YYYY-MM') as month, p.slug, p.name, p.sku, pm.qty
+    from per_month pm join parts p on p.id = pm.part_id`;
+}
+
 /** Parts replaced per month on closed cases in scope (quantities summed in Postgres), to plan stock. */
 export async function partsDemand(scope: ReportScope): Promise<PartsDemand> {
-  const rows = await pg<{ month: string; slug: string; name: string; sku: string; qty: number }[]>`
-    select to_char(date_trunc('month', c.closed_at at time zone 'UTC'), 'YYYY-MM') as month,
-           p.slug, p.name, p.sku, sum(op.quantity)::int as qty
-    from cases c
-    join outcome_parts op on op.case_id = c.id
-    join parts p on p.id = op.part_id
-    where ${inScope(scope)}
-    group by 1, p.slug, p.name, p.sku`;
+  const rows = await partsDemandQuery(scope);
   const months = monthsOf(scope.filter.period);
   const byMonth: Record<string, Record<string, number>> = Object.fromEntries(months.map((m) => [m, {}]));
   const totals = new Map<string, PartTotal>();

@@ -18,25 +18,30 @@ export interface CauseTrend {
   months: ({ month: string } & Record<string, number | string>)[];
 }
 
-/** Closed cases per month by primary cause: the period's five most frequent causes, the rest together. */
-export async function causeTrend(scope: ReportScope): Promise<CauseTrend> {
-  const rows = await pg<{ month: string; key: string | null; name: string | null; n: number }[]>`
-    with base as (
-      select to_char(date_trunc('month', c.closed_at at time zone 'UTC'), 'YYYY-MM') as month, oc.cause_id
+export function causeTrendQuery(scope: ReportScope) {
+  // Counted per (month, cause) first; the top five and the labels are worked out on those few rows.
+  return pg<{ month: string; key: string | null; name: string | null; n: number }[]>`
+    with counts as (
+      select date_trunc('month', c.closed_at at time zone 'UTC') as m, oc.cause_id, count(*)::int as n
       from cases c
       left join outcome_causes oc on oc.case_id = c.id and oc.is_primary
       where ${inScope(scope)}
+      group by 1, 2
     ), top as (
-      select b.cause_id, ca.slug, ca.name
-      from base b join causes ca on ca.id = b.cause_id
-      group by b.cause_id, ca.slug, ca.name
-      order by count(*) desc, ca.name
+      select k.cause_id, ca.slug, ca.name
+      from counts k join causes ca on ca.id = k.cause_id
+      group by k.cause_id, ca.slug, ca.name
+      order by sum(k.n) desc, ca.name
       limit ${TREND_TOP}
     )
-    select b.month, t.slug as key, t.name, count(*)::int as n
-    from base b left join top t on t.cause_id = b.cause_id
-    group by b.month, t.slug, t.name`;
+    select to_char(k.m, 'YYYY-MM') as month, t.slug as key, t.name, sum(k.n)::int as n
+    from counts k left join top t on t.cause_id = k.cause_id
+    group by k.m, t.slug, t.name`;
+}
 
+/** Closed cases per month by primary cause: the period's five most frequent causes, the rest together. */
+export async function causeTrend(scope: ReportScope): Promise<CauseTrend> {
+  const rows = await causeTrendQuery(scope);
   const totals = new Map<string, { name: string; n: number }>();
   for (const r of rows) {
     if (!r.key) continue;

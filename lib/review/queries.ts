@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { trees, treeVersions, type LIKELIHOOD_MODES } from "@/db/schema";
 import type { Strength } from "@/lib/diagnosis";
@@ -50,23 +50,19 @@ export async function treeReview(treeId: number): Promise<TreeReview | null> {
   };
 }
 
-export interface DigestItem extends SuggestionView {
+export interface DigestItem extends SuggestionView, DraftMark {
   treeTitle: string;
+  draftNumber: number | null;
 }
 
 /** The largest open suggestions across all trees in use, for the senior mechanic's home. */
 export async function reviewDigest(limit = 5): Promise<{ items: DigestItem[]; total: number }> {
-  const rows = await db
-    .select({ treeId: trees.id, title: trees.title, versionId: treeVersions.id })
-    .from(trees)
-    .innerJoin(treeVersions, and(eq(treeVersions.treeId, trees.id), eq(treeVersions.state, "published")))
-    .where(eq(trees.archived, false))
-    .orderBy(trees.id, desc(treeVersions.number));
-  const latest = new Map<number, { title: string; versionId: number }>();
-  for (const r of rows) if (!latest.has(r.treeId)) latest.set(r.treeId, { title: r.title, versionId: r.versionId });
-  const reviews = await Promise.all([...latest.values()].map(async (t) => ({ title: t.title, review: await reviewVersion(t.versionId) })));
-  const all = reviews.flatMap(({ title, review }) =>
-    review.suggestions.filter((s) => s.proposedStrength !== s.currentStrength).map((s) => ({ ...s, treeTitle: title })));
+  const rows = await db.select({ id: trees.id }).from(trees).where(eq(trees.archived, false)).orderBy(trees.id);
+  const reviews = (await Promise.all(rows.map((t) => treeReview(t.id)))).filter((r): r is TreeReview => r !== null);
+  const all = reviews.flatMap((review) =>
+    review.suggestions
+      .filter((s) => s.proposedStrength !== s.currentStrength && s.draftStrength !== null)
+      .map((s) => ({ ...s, treeTitle: review.title, draftNumber: review.draft?.number ?? null })));
   all.sort((a, b) => Math.abs(b.learned - b.authored) - Math.abs(a.learned - a.authored) || b.cases - a.cases);
   return { items: all.slice(0, limit), total: all.length };
 }

@@ -42,11 +42,11 @@ const unlistedSet = [
   closed("water-cutout", null, { "crank-seal-worn": 0.6, "controller-corrosion": 0.3, unlisted: 0.1 }),
   closed("water-cutout", "owc-cage-broken", { "crank-seal-worn": 0.7, unlisted: 0.3 }),
 ];
-// None of these may be scored: open ones, a record without triage steps, a case without a ranking.
+// None of these may be scored: open ones, and closed ones without a triage ranking (as imported records are).
 const ignored: CaseSpec[] = [
   { family: F, tree: "grinding-noise", status: "on_bench", createdAt: day("2025-05-01"), primary: C1, ranking: { [C0]: 1, [C1]: 0 } },
   { family: F, tree: "grinding-noise", status: "advised", createdAt: day("2025-05-01"), ranking: { [C0]: 1, [C1]: 0 } },
-  { ...closed("grinding-noise", C1, { [C0]: 1, [C1]: 0 }), steps: false },
+  { ...closed("grinding-noise", C1, { [C0]: 1, [C1]: 0 }), steps: false, ranking: null },
   { family: F, tree: "grinding-noise", closedAt, primary: C1, ranking: null },
 ];
 

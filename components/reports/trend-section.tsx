@@ -1,0 +1,33 @@
+import { EmptyState } from "@/components/ui/empty-state";
+import { Panel } from "@/components/ui/panel";
+import type { CauseTrend } from "@/lib/reports/trend";
+import { monthLabel } from "./format";
+import { NumberTable } from "./number-table";
+import { TrendChart } from "./trend-chart";
+
+export function TrendSection({ trend }: { trend: CauseTrend }) {
+  if (trend.series.length === 0) return <Panel title="Causes month by month"><EmptyState title="No closed cases in this period." /></Panel>;
+  type Row = { month: string; label: string } & Record<string, number | string>;
+  const months: Row[] = trend.months.map((m) => ({ ...m, label: monthLabel(m.month) }));
+  return (
+    <Panel title="Causes month by month">
+      <p className="mb-3 text-sm text-ink-soft">Closed cases per month for the five most frequent causes of the period; every other cause in one dashed line.</p>
+      <TrendChart months={months} series={trend.series} />
+      <details className="mt-3">
+        <summary className="cursor-pointer text-sm font-medium text-copper-dark">Numbers per month</summary>
+        <div className="mt-2">
+          <NumberTable
+            caption="Closed cases per month and cause"
+            testId="trend-table"
+            rows={months}
+            rowKey={(m) => m.month}
+            columns={[
+              { key: "month", label: "Month", cell: (m) => m.label },
+              ...trend.series.map((s) => ({ key: s.key, label: s.name, numeric: true, cell: (m: Row) => String(m[s.key] ?? 0) })),
+            ]}
+          />
+        </div>
+      </details>
+    </Panel>
+  );
+}
