@@ -24,7 +24,8 @@ export function outcomeLockedReason(status: CaseStatus): string | null {
   if (status === "on_bench") return null;
   if (status === "closed") return FROZEN_MESSAGE;
   if (status === "booked_in") return "Put the unit on the bench before recording its outcome.";
-  return "A bench outcome is recorded once the unit is booked in and on the bench.";
+  if (status === "advised") return "Advised by phone; no unit came in, so there is no bench outcome.";
+  return "Still in triage: the bench outcome is recorded once the unit is on the bench.";
 }
 
 /** Moves the case and records the move (who, when, from → to) in case_events. */

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { BenchOutcomeSlot } from "@/components/cases/bench-outcome-slot";
+import { OutcomeSection } from "@/components/outcomes/outcome-section";
 import { CaseMail } from "@/components/cases/case-mail";
 import { EventList } from "@/components/cases/event-list";
 import { StatusBadge, STATUS_LABEL } from "@/components/cases/status-badge";
@@ -64,7 +64,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
       {kase.triagedAt ? <Panel title="Triage result"><TriageSummary kase={kase} nameOf={nameOf} /></Panel> : null}
 
       {/* Bench outcome: the outcome form (confirmed causes, parts, upgrades, photos) mounts in this slot. */}
-      <Panel title="Bench outcome"><BenchOutcomeSlot caseId={kase.id} status={kase.status} /></Panel>
+      <OutcomeSection caseId={kase.id} user={user} />
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <Panel title={`Answers (${steps.length})`}>

@@ -6,6 +6,7 @@ import { TreeOutline } from "@/components/trees/tree-outline";
 import { VersionBadge } from "@/components/trees/status-badge";
 import { StartDraftForm } from "@/components/trees/version-forms";
 import { VersionTable } from "@/components/trees/version-table";
+import { EvidenceSuggestions } from "@/components/review/evidence-suggestions";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
@@ -78,6 +79,7 @@ export default async function TreePage({ params, searchParams }: {
       <Panel title={published ? `Version ${published.number}, as published` : "Not published yet"}>
         {graph ? <TreeOutline graph={graph} /> : <EmptyState title="No published version yet.">Publish the draft to make it available for triage.</EmptyState>}
       </Panel>
+      {published ? <EvidenceSuggestions treeId={detail.id} /> : null}
     </div>
   );
 }
