@@ -1,5 +1,5 @@
 // Series colours from Rootbench's palette (tailwind.config.ts), in the order charts use them.
-export const SERIES_COLOURS = ["#b4532a", "#3f7d4e", "#a86f08", "#4a5463", "#b3261e", "#8a93a0", "#8f3f1f"] as const;
+export const SERIES_COLOURS = ["#b4532a", "#3f7d4e", "#4a5463", "#a86f08", "#1c2430", "#8a93a0", "#b3261e"] as const;
 export const INK = "#1c2430";
 export const INK_FAINT = "#8a93a0";
 export const GRID = "#ece8df";

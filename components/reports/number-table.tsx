@@ -25,7 +25,7 @@ export function NumberTable<R>({ caption, columns, rows, rowKey, testId }: {
         <tbody>
           {rows.map((r, i) => (
             <tr key={rowKey(r, i)} className="border-b border-ink-faint/15">
-              {columns.map((c) => <td key={c.key} className={`py-1.5 pr-3 ${c.numeric ? "text-right font-mono tabular-nums" : ""}`}>{c.cell(r)}</td>)}
+              {columns.map((c) => <td key={c.key} className={`py-1.5 pr-3 ${c.numeric ? "whitespace-nowrap text-right font-mono tabular-nums" : ""}`}>{c.cell(r)}</td>)}
             </tr>
           ))}
         </tbody>

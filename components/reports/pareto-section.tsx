@@ -19,10 +19,10 @@ export function ParetoSection({ pareto }: { pareto: Pareto }) {
     <Panel title="Confirmed causes">
       <p className="mb-3 text-sm text-ink-soft">
         Primary confirmed cause of {whole.format(pareto.total)} closed case{pareto.total === 1 ? "" : "s"}, most frequent first.
-        Whiskers show the 95 % Wilson interval of each share; the line adds the shares up.
+        Whiskers show the 95 % Wilson interval of each share (left axis); the line adds the shares up (right axis).
         {pareto.rows.length > CHART_CAUSES ? ` The chart shows the first ${CHART_CAUSES}; the table has all ${pareto.rows.length}.` : ""}
       </p>
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      <div className="grid gap-6 2xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <ParetoChart points={points} />
         <div className="max-h-96 overflow-y-auto">
           <NumberTable

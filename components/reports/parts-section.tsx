@@ -1,21 +1,23 @@
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import type { PartsDemand } from "@/lib/reports/parts";
-import { monthLabel, whole } from "./format";
+import { monthLabels, PARTIAL_MONTH_NOTE, whole } from "./format";
 import { NumberTable } from "./number-table";
 import { PartsChart } from "./parts-chart";
 
 const CHART_PARTS = 6;
 
-export function PartsSection({ demand }: { demand: PartsDemand }) {
+export function PartsSection({ demand, period }: { demand: PartsDemand; period: { fromDay: string; toDay: string } }) {
   if (demand.parts.length === 0) return <Panel title="Parts demand"><EmptyState title="No parts replaced on closed cases in this period." /></Panel>;
   const top = demand.parts.slice(0, CHART_PARTS);
+  const labels = monthLabels(demand.months, period.fromDay, period.toDay);
+  const partial = [...labels.values()].some((l) => l.endsWith("*"));
   const months = demand.months.map((m) => ({
-    month: m, label: monthLabel(m), ...Object.fromEntries(top.map((p) => [p.slug, demand.byMonth[m]?.[p.slug] ?? 0])),
+    month: m, label: labels.get(m) ?? m, ...Object.fromEntries(top.map((p) => [p.slug, demand.byMonth[m]?.[p.slug] ?? 0])),
   }));
   return (
     <Panel title="Parts demand">
-      <p className="mb-3 text-sm text-ink-soft">Parts replaced on closed cases, per month, to plan stock. The chart stacks the {top.length} most used; the table lists every part.</p>
+      <p className="mb-3 text-sm text-ink-soft">Parts replaced on closed cases, per month, to plan stock. The chart stacks the {top.length} most used; the table lists every part.{partial ? ` ${PARTIAL_MONTH_NOTE}` : ""}</p>
       <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <PartsChart months={months} parts={top} />
         <div className="max-h-80 overflow-y-auto">
@@ -26,7 +28,7 @@ export function PartsSection({ demand }: { demand: PartsDemand }) {
             rowKey={(p) => p.slug}
             columns={[
               { key: "part", label: "Part", cell: (p) => p.name },
-              { key: "sku", label: "SKU", cell: (p) => <span className="font-mono text-xs">{p.sku}</span> },
+              { key: "sku", label: "SKU", cell: (p) => <span className="whitespace-nowrap font-mono text-xs">{p.sku}</span> },
               { key: "total", label: "Total", numeric: true, cell: (p) => whole.format(p.total) },
               { key: "month", label: "Per month", numeric: true, cell: (p) => p.perMonth.toFixed(1) },
             ]}

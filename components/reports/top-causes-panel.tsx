@@ -23,7 +23,7 @@ export async function TopCausesPanel({ today = new Date() }: { today?: Date }) {
                 <span className="font-mono tabular-nums text-ink-soft">{r.n} · {pct(r.share, 0)}</span>
               </div>
               <span className="h-1.5 rounded bg-paper-deep" aria-hidden="true">
-                <span className="block h-1.5 rounded bg-copper" style={{ width: `${Math.max(2, Math.round(r.share * 100))}%` }} />
+                <span className="block h-1.5 rounded bg-copper" style={{ width: `${Math.max(2, Math.round((r.share / top[0].share) * 100))}%` }} />
               </span>
             </li>
           ))}

@@ -16,8 +16,7 @@ export function TrendChart({ months, series }: {
           <Tooltip />
           <Legend wrapperStyle={{ fontSize: 12 }} />
           {series.map((s, i) => (
-            <Line key={s.key} dataKey={s.key} name={s.name} stroke={seriesColour(i)} strokeWidth={2} dot={false}
-              strokeDasharray={s.key === "_rest" ? "4 3" : undefined} isAnimationActive={false} type="monotone" />
+            <Line key={s.key} dataKey={s.key} name={s.name} stroke={seriesColour(i)} strokeWidth={2} dot={false} isAnimationActive={false} type="linear" />
           ))}
         </LineChart>
       </ResponsiveContainer>

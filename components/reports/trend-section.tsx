@@ -1,18 +1,22 @@
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
-import type { CauseTrend } from "@/lib/reports/trend";
-import { monthLabel } from "./format";
+import { TREND_REST, type CauseTrend } from "@/lib/reports/trend";
+import { monthLabels, PARTIAL_MONTH_NOTE } from "./format";
 import { NumberTable } from "./number-table";
 import { TrendChart } from "./trend-chart";
 
-export function TrendSection({ trend }: { trend: CauseTrend }) {
+export function TrendSection({ trend, period }: { trend: CauseTrend; period: { fromDay: string; toDay: string } }) {
   if (trend.series.length === 0) return <Panel title="Causes month by month"><EmptyState title="No closed cases in this period." /></Panel>;
   type Row = { month: string; label: string } & Record<string, number | string>;
-  const months: Row[] = trend.months.map((m) => ({ ...m, label: monthLabel(m.month) }));
+  const labels = monthLabels(trend.months.map((m) => m.month), period.fromDay, period.toDay);
+  const months: Row[] = trend.months.map((m) => ({ ...m, label: labels.get(m.month) ?? m.month }));
+  const partial = [...labels.values()].some((l) => l.endsWith("*"));
   return (
     <Panel title="Causes month by month">
-      <p className="mb-3 text-sm text-ink-soft">Closed cases per month for the five most frequent causes of the period; every other cause in one dashed line.</p>
-      <TrendChart months={months} series={trend.series} />
+      <p className="mb-3 text-sm text-ink-soft">
+        Closed cases per month for the five most frequent causes of the period. Every other cause together is in the table (as a line it would dwarf the five).{partial ? ` ${PARTIAL_MONTH_NOTE}` : ""}
+      </p>
+      <TrendChart months={months} series={trend.series.filter((s) => s.key !== TREND_REST)} />
       <details className="mt-3">
         <summary className="cursor-pointer text-sm font-medium text-copper-dark">Numbers per month</summary>
         <div className="mt-2">

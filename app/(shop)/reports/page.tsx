@@ -39,14 +39,14 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         importHref={may(user.role, "reports:import") ? "/reports/import" : null}
       />
       <ParetoSection pareto={report.pareto} />
-      <TrendSection trend={report.trend} />
+      <TrendSection trend={report.trend} period={filter.period} />
       <AccuracySection
         accuracy={report.accuracy}
         selectedVersionId={Number.isSafeInteger(version) ? version : null}
         linkFor={(id) => `/reports?${query}&version=${id}#calibration`}
       />
       <div className="grid gap-6">
-        <PartsSection demand={report.parts} />
+        <PartsSection demand={report.parts} period={filter.period} />
         <RepeatSection repeats={report.repeats} />
       </div>
     </div>
