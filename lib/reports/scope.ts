@@ -14,7 +14,8 @@ export interface ReportScope {
 
 export async function resolveScope(filter: ReportFilter): Promise<ReportScope> {
   if (!filter.familySlug) return { filter, familyId: null, familyName: null };
-  const [row] = await pg<{ id: number; name: string }[]>`select id, name from motor_families where slug = ${filter.familySlug}`;
+  const [row] = await pg<{ id: number; name: string }[]>`
+    select id, name || case when generation <> '' then ' ' || generation else '' end as name from motor_families where slug = ${filter.familySlug}`;
   // An unknown family in a hand-edited URL reports on all families rather than on nothing.
   if (!row) return { filter: { ...filter, familySlug: null }, familyId: null, familyName: null };
   return { filter, familyId: row.id, familyName: row.name };
