@@ -7,6 +7,8 @@ import { WriteupList } from "./writeup-list";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PracticeHistoryPanel } from "@/components/practice/practice-history-panel";
 import { WaitingForUnitPanel } from "@/components/cases/waiting-for-unit";
+import { TopCausesPanel } from "@/components/reports/top-causes-panel";
+import { ReviewDigestPanel } from "@/components/review/review-digest-panel";
 import { TreeDraftsPanel } from "@/components/trees/home-drafts-panel";
 
 /** One home per role: what that person opens Rootbench for first. */
@@ -47,6 +49,7 @@ async function SeniorHome({ user }: { user: SessionUser }) {
         )}
       </Panel>
       <Panel title="Your open cases"><CaseList items={mine} empty="No open cases on your name." /></Panel>
+      <ReviewDigestPanel />
       <TreeDraftsPanel />
     </div>
   );
@@ -71,7 +74,10 @@ async function LeadHome() {
         <Stat label="Closed this month" value={counts.closedThisMonth} />
         <Stat label="Active accounts" value={counts.activeUsers} />
       </div>
-      <Panel title="Open cases in the shop"><CaseList items={open} empty="No open cases." /></Panel>
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <Panel title="Open cases in the shop"><CaseList items={open} empty="No open cases." /></Panel>
+        <TopCausesPanel />
+      </div>
     </>
   );
 }
