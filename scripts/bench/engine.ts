@@ -1,6 +1,7 @@
 // Timing of the diagnosis engine on generated trees: `npx tsx scripts/bench/engine.ts`.
 // The trees are random but seeded, so every run measures the same work.
 import { rankNextQuestions, scoreCauses, type DxAnswer, type DxNode, type DxOption, type DxTree, type Strength } from "../../lib/diagnosis";
+import { prng } from "./support/prng";
 
 const SIZES = [300, 1000];
 const CAUSES = 60;
@@ -10,17 +11,6 @@ const EVIDENCE_PER_OPTION = 4;
 const WARMUP_MS = 1500;
 const MEASURE_MS = 6000;
 
-/** mulberry32: a small seeded PRNG. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const STRENGTHS: Strength[] = ["rules_out", "against", "for", "for", "strong", "against"];
 

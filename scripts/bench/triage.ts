@@ -16,6 +16,7 @@ import { startCase } from "@/lib/cases/start";
 import { undoLastStep } from "@/lib/cases/undo";
 import type { GraphInput } from "@/lib/trees/graph-types";
 import { loadGraph, writeGraph } from "@/lib/trees/graph";
+import { prng } from "./support/prng";
 
 const NODES = 300;
 const CAUSE_COUNT = 30;
@@ -26,17 +27,6 @@ const RUNS = 200;
 const WARMUP = 20;
 const STRENGTHS = ["rules_out", "against", "for", "for", "strong", "against"] as const;
 
-/** mulberry32, so every run measures the same tree. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function generateGraph(slugs: string[], seed: number): GraphInput {
   const random = prng(seed);
