@@ -1,3 +1,5 @@
+import Link from "next/link";
+
 /** A plain GET form: the filters live in the URL, so a filtered list can be linked and reloaded. */
 export function TreeFilters({ q, status, family, families }: {
   q: string;
@@ -29,7 +31,7 @@ export function TreeFilters({ q, status, family, families }: {
         </select>
       </label>
       <button type="submit" className="rounded-md border border-ink-soft px-4 py-2 font-medium text-ink hover:bg-paper-deep">Apply</button>
-      {q || status !== "all" || family ? <a href="/trees" className="py-2 text-sm">Clear</a> : null}
+      {q || status !== "all" || family ? <Link href="/trees" className="py-2 text-sm">Clear</Link> : null}
     </form>
   );
 }
