@@ -18,7 +18,7 @@ export async function seedTrees(tx: Tx, content: Content, familyId: Map<string, 
     }
     const [version] = await tx
       .insert(treeVersions)
-      .values({ treeId: tree.id, number: 1, state: "draft", editedBy: authorId, note: "First edition from the workshop's notes" })
+      .values({ treeId: tree.id, number: 1, state: "draft", editedBy: authorId, editedAt: new Date("2024-11-12T15:00:00Z"), note: "First edition from the workshop's notes" })
       .returning({ id: treeVersions.id });
     await writeGraph(tx, version.id, treeFileToGraphInput(file));
     await tx
