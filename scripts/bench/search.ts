@@ -11,23 +11,13 @@ import { like } from "drizzle-orm";
 import { db, sql as pg } from "../../db";
 import { writeupCauses, writeupFamilies, writeupParts, writeups } from "../../db/schema";
 import { parseWriteup } from "../../lib/content/catalogue";
+import { prng } from "./support/prng";
 
 const BASE = process.env.BENCH_BASE_URL ?? "http://127.0.0.1:3200";
 const COUNT = Number(process.env.BENCH_WRITEUPS ?? 10_000);
 const PREFIX = "bench-gen-";
 const ROOT = path.resolve(__dirname, "../..");
 
-/** mulberry32: a small seeded PRNG, so every run searches the same corpus. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 // The generated corpus is recombined from the demo write-ups' own sentences, headings, titles and
 // tags, so its words occur about as often as in the shop's real writing.
