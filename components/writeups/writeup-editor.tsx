@@ -106,7 +106,10 @@ export function WriteupEditor({ initial, options, canPublish }: { initial: Edito
           <p className="mb-3 text-xs uppercase tracking-wide text-ink-faint">Preview</p>
           <h1 className="text-2xl">{values.title || "Untitled write-up"}</h1>
           {values.summary ? <p className="mt-1 text-ink-soft">{values.summary}</p> : null}
-          <div className="mt-4"><MarkdownBody html={preview.html} testId="writeup-preview" /></div>
+          <div className="mt-4">
+            {values.body.trim() ? null : <p className="text-sm text-ink-faint">The body appears here as you type, exactly as the published page will show it.</p>}
+            <MarkdownBody html={preview.html} testId="writeup-preview" />
+          </div>
         </section>
       </div>
 
