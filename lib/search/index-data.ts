@@ -33,7 +33,7 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
     select w.id, w.title, w.summary, w.body, w.tags, w.published_at, w.updated_at,
       coalesce((select json_agg(json_build_array(c.slug, c.name) order by c.name)
         from writeup_causes wc join causes c on c.id = wc.cause_id where wc.writeup_id = w.id), '[]') as causes,
-      coalesce((select json_agg(json_build_array(f.slug, f.name) order by f.name)
+      coalesce((select json_agg(json_build_array(f.slug, f.name || ' ' || f.generation) order by f.name, f.generation)
         from writeup_families wf join motor_families f on f.id = wf.family_id where wf.writeup_id = w.id), '[]') as families,
       coalesce((select json_agg(p.name order by p.name)
         from writeup_parts wp join parts p on p.id = wp.part_id where wp.writeup_id = w.id), '[]') as parts
