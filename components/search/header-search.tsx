@@ -9,9 +9,9 @@ export function HeaderSearch() {
         id="header-search"
         name="q"
         type="search"
-        placeholder="Search write-ups…"
+        placeholder="Search…"
         autoComplete="off"
-        className="w-44 rounded-md border border-paper/30 bg-ink-soft/40 px-2 py-1 text-sm text-paper placeholder:text-paper/60 focus:w-60 focus:bg-white focus:text-ink"
+        className="w-28 rounded-md border border-paper/30 bg-ink-soft/40 px-2 py-1 text-sm text-paper placeholder:text-paper/60 focus:w-56 focus:bg-white focus:text-ink"
       />
     </Form>
   );

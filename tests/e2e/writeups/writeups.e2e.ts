@@ -51,6 +51,23 @@ describe("a trainee searches the write-ups and reads one", () => {
     await screenshot(browser.page, "writeups-article");
   });
 
+  it("shows a seeded write-up's drawing, served from the upload route", async () => {
+    const search = new WriteupSearchPage(browser.page);
+    await search.open();
+    await search.type("sprag rolled");
+    await search.results().first().getByRole("link").click();
+    await browser.page.waitForURL(/\/writeups\/\d+$/);
+    const img = browser.page.getByTestId("writeup-body").locator("img").first();
+    expect(await img.getAttribute("src")).toMatch(/^\/api\/uploads\/[a-f0-9]{32}$/);
+    await img.scrollIntoViewIfNeeded();
+    await browser.page.waitForFunction(() => {
+      const el = document.querySelector("[data-testid=writeup-body] img") as HTMLImageElement | null;
+      return !!el && el.complete && el.naturalWidth > 0;
+    });
+    await browser.page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(browser.page, "writeups-article-photo");
+  });
+
   it("filters by cause from a chip, and the header box jumps to a search", async () => {
     const chip = browser.page.locator("a[href^='/writeups?cause=']").first();
     const href = (await chip.getAttribute("href"))!;
