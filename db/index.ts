@@ -18,6 +18,32 @@ export const sql: Client =
   });
 globalForDb.rootbenchSql = sql;
 
-export const db = drizzle(sql, { schema });
+/**
+ * drizzle sends every query as an unnamed statement, which postgres.js must describe before it can
+ * bind the parameters: two round trips per query. Named statements are described once per
+ * connection and then take one. Queries without parameters keep the simple protocol.
+ */
+function namedStatements(client: Client): Client {
+  return new Proxy(client, {
+    get(target, property, receiver) {
+      if (property === "unsafe") {
+        return (query: string, params?: unknown[], options?: Record<string, unknown>) =>
+          target.unsafe(query, params as never, { ...options, prepare: (params?.length ?? 0) > 0 });
+      }
+      if (property === "begin" || property === "savepoint") {
+        const original = Reflect.get(target, property, receiver) as (...a: unknown[]) => unknown;
+        return (...args: unknown[]) => {
+          const last = args.length - 1;
+          const body = args[last] as (tx: Client) => unknown;
+          args[last] = (tx: Client) => body(namedStatements(tx));
+          return original.apply(target, args);
+        };
+      }
+      return Reflect.get(target, property, receiver);
+    },
+  });
+}
+
+export const db = drizzle(namedStatements(sql), { schema });
 export type Db = typeof db;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];

@@ -1,6 +1,6 @@
 import { computeRanking } from "@/lib/cases/ranking";
 import type { StoredRanking } from "@/lib/cases/ranking-types";
-import type { DxSettings, DxTree } from "@/lib/diagnosis";
+import { ModelCache, type DxSettings, type DxTree } from "@/lib/diagnosis";
 import type { WalkStep } from "@/lib/cases/walk-types";
 
 export interface WalkState {
@@ -21,12 +21,13 @@ export function currentRanking(state: WalkState): StoredRanking {
  * screen moves at once; the server's ranking replaces this one when it answers.
  */
 export function optimisticWalk(tree: DxTree, settings: DxSettings) {
+  const models = new ModelCache(tree);
   return (state: WalkState, change: WalkChange): WalkState => {
     if (change.type === "undo") return { ...state, steps: state.steps.slice(0, -1) };
     const answers = [...state.steps, change].map((s) => ({ nodeId: s.nodeKey, optionId: s.optionKey }));
     let ranking: StoredRanking;
     try {
-      ranking = computeRanking(tree, answers, settings);
+      ranking = computeRanking(tree, answers, settings, models);
     } catch {
       ranking = currentRanking(state);
     }

@@ -6,6 +6,7 @@ import { loadCaseContext, type CaseContext } from "./context";
 import { answerInput, type AnswerInput } from "./inputs";
 import { computeRanking } from "./ranking";
 import type { StoredRanking } from "./ranking-types";
+import { rememberAppended } from "./context-cache";
 import { appendStep } from "./step-writes";
 import { publishedTree, type CaseTree } from "./tree-cache";
 
@@ -26,7 +27,7 @@ export function answersOf(tree: CaseTree, steps: CaseContext["steps"]): DxAnswer
 
 export function rankingFor(tree: CaseTree, answers: DxAnswer[], ctx: Pick<CaseContext, "settings">): StoredRanking {
   try {
-    return computeRanking(tree.dx, answers, ctx.settings);
+    return computeRanking(tree.dx, answers, ctx.settings, tree.models);
   } catch (error) {
     if (error instanceof DiagnosisError) throw new AppError("invalid", `The tree cannot score these answers: ${error.message}`);
     throw error;
@@ -53,7 +54,8 @@ const ATTEMPTS = 3;
 /** Records one answer and returns the ranking shown after it (DESIGN §4, stored on the step). */
 export async function recordAnswer(input: AnswerInput, userId: string): Promise<AnsweredStep> {
   for (let attempt = 1; ; attempt++) {
-    const ctx = await loadCaseContext(input.caseId);
+    // The first try works from what this process already knows of the case; a refused insert reads afresh.
+    const ctx = await loadCaseContext(input.caseId, { reuse: attempt === 1 });
     if (!ctx) throw new AppError("not_found", "That case does not exist.");
     assertOpen(ctx);
     const tree = await publishedTree(ctx.treeVersionId);
@@ -61,14 +63,15 @@ export async function recordAnswer(input: AnswerInput, userId: string): Promise<
     const ranking = rankingFor(tree, [...answersOf(tree, ctx.steps), { nodeId: node.key, optionId: option.key }], ctx);
     const last = ctx.steps.at(-1) ?? null;
     try {
-      const step = await appendStep({ caseId: ctx.id, previous: last, nodeId: node.id, optionId: option.id, userId, ranking });
+      const step = await appendStep({ caseId: ctx.id, previous: last, nodeId: node.id, optionId: option.id, userId, ranking, basis: ctx.basis });
       if (step) {
+        rememberAppended(ctx.id, last?.id ?? null, { id: step.id, seq: step.seq, nodeId: node.id, optionId: option.id });
         return { step: { id: step.id, seq: step.seq, nodeKey: node.key, optionKey: option.key, answeredAt: step.answeredAt.toISOString() }, ranking };
       }
     } catch (error) {
       if (pgErrorCode(error) !== "23505") throw error;
     }
-    // Another answer, an undo or the finish got in between: start again from what is stored now.
+    // Another answer, an undo, the finish or a settings change got in between: start again from what is stored now.
     if (attempt === ATTEMPTS) throw new AppError("conflict", "The case changed in another window while you answered; reload it and try again.");
   }
 }

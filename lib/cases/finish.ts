@@ -9,6 +9,7 @@ import { enqueueMail } from "@/lib/mail/outbox";
 import { answersOf, assertOpen, rankingFor } from "./answer";
 import { causesBySlug } from "./catalogue";
 import { loadCaseContext } from "./context";
+import { forgetCase } from "./context-cache";
 import { finishInput, type FinishInput } from "./inputs";
 import { benchPlanFor, roughQuote } from "./quote";
 import { finalRankingOf, type StoredRanking } from "./ranking-types";
@@ -41,7 +42,7 @@ export async function finishCase(input: FinishInput, userId: string): Promise<Fi
   const answers = answersOf(tree, ctx.steps);
   const shop = await loadShop();
 
-  return db.transaction(async (tx) => {
+  const finished = await db.transaction(async (tx) => {
     const [row] = await tx.select().from(cases).where(eq(cases.id, ctx.id)).for("update");
     assertOpen(row);
     const [last] = await tx.select({ id: caseSteps.id, ranking: caseSteps.ranking }).from(caseSteps)
@@ -92,6 +93,8 @@ export async function finishCase(input: FinishInput, userId: string): Promise<Fi
     }
     return { id: row.id, status: input.outcome, mailQueued };
   });
+  forgetCase(ctx.id);
+  return finished;
 }
 
 export const finishCaseAction = defineAction({

@@ -1,4 +1,4 @@
-import { analyseAnswers, type DxAnswer, type DxSettings, type DxTree } from "@/lib/diagnosis";
+import { analyseAnswers, type DxAnswer, type DxSettings, type DxTree, type ModelCache } from "@/lib/diagnosis";
 import type { StoredRanking } from "./ranking-types";
 
 /** How many next-question suggestions a step keeps; the screen shows the best three not skipped. */
@@ -7,9 +7,10 @@ export const STORED_SUGGESTIONS = 5;
 /**
  * The ranking the triage screen shows after `answers`, straight from the engine. Pure, so the
  * browser runs it for the optimistic update and the server for the stored, authoritative copy.
+ * `models`, made for this very tree, keeps its checked form and likelihoods between calls.
  */
-export function computeRanking(tree: DxTree, answers: DxAnswer[], settings: DxSettings): StoredRanking {
-  const { scores, questions, conclusion } = analyseAnswers(tree, answers, settings);
+export function computeRanking(tree: DxTree, answers: DxAnswer[], settings: DxSettings, models?: ModelCache): StoredRanking {
+  const { scores, questions, conclusion } = analyseAnswers(tree, answers, settings, models);
   const suggestions = questions.slice(0, STORED_SUGGESTIONS);
   return {
     causes: scores.causes.map((c) => ({

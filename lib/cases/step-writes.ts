@@ -1,5 +1,7 @@
 import "server-only";
 import { sql } from "@/db";
+import type { CaseContext } from "./context";
+import { DIAGNOSIS_SETTINGS_KEY } from "./dx-settings";
 import type { StoredRanking } from "./ranking-types";
 
 export interface InsertedStep {
@@ -9,8 +11,10 @@ export interface InsertedStep {
 }
 
 /**
- * Appends a step in one statement, which is its own transaction: it locks the case row (by
- * touching updated_at) while the case is still open, and inserts only if the step the ranking was computed after is still
+ * Appends a step in one statement, which is its own transaction. It locks the case row (for
+ * update, without writing it: the step's answered_at is the latest activity) while the case is
+ * still open and the shop's settings and the tree's likelihood mode are still those the ranking was
+ * computed with (`basis`), and inserts only if the step the ranking was computed after is still
  * the last one (that row is share-locked, so an undo in between makes this insert nothing).
  * unique(case_id, seq) turns two racing answers into one success and one 23505.
  * Returns null when the guard fails. (Raw postgres.js here: drizzle's client leaves json and
@@ -23,12 +27,17 @@ export async function appendStep(input: {
   optionId: number;
   userId: string;
   ranking: StoredRanking;
+  basis: CaseContext["basis"];
 }): Promise<InsertedStep | null> {
   const seq = (input.previous?.seq ?? 0) + 1;
   const previousId = input.previous?.id ?? null;
   const rows = await sql<{ id: number; seq: number; answered_ms: number }[]>`
     with open_case as (
-      update cases set updated_at = now() where id = ${input.caseId} and status = 'open' returning id
+      select c.id from cases c
+      where c.id = ${input.caseId} and c.status = 'open'
+        and (select md5(value::text) from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) is not distinct from ${input.basis.settingsHash}::text
+        and (select t.likelihood_mode from tree_versions v join trees t on t.id = v.tree_id where v.id = c.tree_version_id) = ${input.basis.likelihoodMode}
+      for update
     ), previous as (
       select id from case_steps where id = ${previousId} and case_id = ${input.caseId} for share
     )

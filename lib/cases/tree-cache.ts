@@ -1,5 +1,5 @@
 import "server-only";
-import type { DxTree } from "@/lib/diagnosis";
+import { ModelCache, type DxTree } from "@/lib/diagnosis";
 import { AppError } from "@/lib/errors";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { GraphNode, GraphOption, TreeGraph } from "@/lib/trees/graph-types";
@@ -7,6 +7,8 @@ import type { GraphNode, GraphOption, TreeGraph } from "@/lib/trees/graph-types"
 export interface CaseTree {
   graph: TreeGraph;
   dx: DxTree;
+  /** The engine's checked tree and likelihood matrices, reused by every answer on this version. */
+  models: ModelCache;
   nodeById: ReadonlyMap<number, GraphNode>;
   nodeByKey: ReadonlyMap<string, GraphNode>;
   optionById: ReadonlyMap<number, GraphOption>;
@@ -19,9 +21,11 @@ const globalCache = globalThis as unknown as { rootbenchCaseTrees?: Map<number, 
 const cache: Map<number, Promise<CaseTree>> = (globalCache.rootbenchCaseTrees ??= new Map());
 
 function build(graph: TreeGraph, dx: DxTree): CaseTree {
+  const frozen = deepFreeze(dx);
   return Object.freeze({
     graph: deepFreeze(graph),
-    dx: deepFreeze(dx),
+    dx: frozen,
+    models: new ModelCache(frozen),
     nodeById: new Map(graph.nodes.map((n) => [n.id, n])),
     nodeByKey: new Map(graph.nodes.map((n) => [n.key, n])),
     optionById: new Map(graph.options.map((o) => [o.id, o])),

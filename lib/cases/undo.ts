@@ -6,6 +6,7 @@ import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { answersOf, assertOpen, rankingFor } from "./answer";
 import { loadCaseContext } from "./context";
+import { rememberUndone } from "./context-cache";
 import { undoInput } from "./inputs";
 import type { StoredRanking } from "./ranking-types";
 import { publishedTree } from "./tree-cache";
@@ -29,9 +30,10 @@ export async function undoLastStep(caseId: number, seq: number): Promise<UndoneS
     if (last.seq !== seq) throw new AppError("conflict", `Answer ${seq} is not the last one any more (the last is ${last.seq}); reload the case.`);
     await tx.delete(caseSteps).where(and(eq(caseSteps.id, last.id), eq(caseSteps.caseId, caseId)));
     await tx.update(cases).set({ updatedAt: new Date() }).where(eq(cases.id, caseId));
-    return before ? (before.ranking as StoredRanking) : null;
+    return { removedId: last.id, ranking: before ? (before.ranking as StoredRanking) : null };
   });
-  if (previous) return { removedSeq: seq, ranking: previous };
+  rememberUndone(caseId, previous.removedId);
+  if (previous.ranking) return { removedSeq: seq, ranking: previous.ranking };
   return { removedSeq: seq, ranking: await startingRanking(caseId) };
 }
 

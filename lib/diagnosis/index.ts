@@ -30,6 +30,7 @@ export { entropyBits, expectedInformationGain } from "./information";
 export { rankNextQuestions } from "./next-question";
 export { suggestConclusion } from "./conclusion";
 export { analyseAnswers, type Analysis } from "./analyse";
+export { ModelCache } from "./model";
 export { benchPlan } from "./bench-plan";
 export { validateTree } from "./validate";
 export { learnLikelihoods } from "./learn";

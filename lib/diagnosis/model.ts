@@ -2,7 +2,7 @@ import { Float64Arena } from "./arena";
 import { DiagnosisError } from "./errors";
 import { requireNonNegative, requirePositive } from "./guards";
 import { resolveSettings, type ResolvedSettings } from "./settings";
-import { isStrength, weightValue } from "./weights";
+import { DEFAULT_WEIGHTS, isStrength, weightValue } from "./weights";
 import type { NodeLikelihood } from "./likelihood";
 import type { DxOption, DxSettings, DxTree } from "./types";
 
@@ -65,8 +65,12 @@ export function indexTree(tree: DxTree): TreeIndex {
   return { tree, nodeIndex, optionById, optionsOf, outcomesOf, outcomeIndex };
 }
 
-export function buildModel(tree: DxTree, settings?: DxSettings): Model {
-  const resolved = resolveSettings(settings);
+/** The part of a model that depends on the tree alone: indexes, with every number checked. */
+interface CheckedTree extends TreeIndex {
+  causeIndex: Map<string, number>;
+}
+
+function checkTree(tree: DxTree): CheckedTree {
   const index = indexTree(tree);
   const causeIndex = indexIds(tree.causes, "causes");
 
@@ -90,25 +94,77 @@ export function buildModel(tree: DxTree, settings?: DxSettings): Model {
       const causeId = causeIds[e];
       const w = evidence[causeId];
       if (typeof w === "number" ? w >= 0 && w < Infinity : isStrength(w)) continue;
-      weightValue(w, resolved.weights, `evidence of option ${JSON.stringify(option.id)} for ${JSON.stringify(causeId)}`);
+      weightValue(w, DEFAULT_WEIGHTS, `evidence of option ${JSON.stringify(option.id)} for ${JSON.stringify(causeId)}`);
     }
   }
+  return { ...index, causeIndex };
+}
 
-  const K = tree.causes.length;
+function modelOf(checked: CheckedTree, resolved: ResolvedSettings): Model {
+  const K = checked.tree.causes.length;
   const hasUnlisted = resolved.unlistedShare > 0;
   if (K === 0 && !hasUnlisted) {
     throw new DiagnosisError("no_hypotheses", "The tree lists no causes and the unlisted hypothesis is disabled");
   }
   return {
-    ...index,
+    ...checked,
     settings: resolved,
-    causeIndex,
     K,
     H: K + (hasUnlisted ? 1 : 0),
     hasUnlisted,
-    matrices: new Array<NodeLikelihood | undefined>(tree.nodes.length),
+    matrices: new Array<NodeLikelihood | undefined>(checked.tree.nodes.length),
     arena: new Float64Arena(),
   };
+}
+
+export function buildModel(tree: DxTree, settings?: DxSettings, cache?: ModelCache): Model {
+  if (cache) return cache.model(tree, settings);
+  const resolved = resolveSettings(settings);
+  return modelOf(checkTree(tree), resolved);
+}
+
+const MAX_VARIANTS = 4;
+
+/**
+ * Keeps the checked tree and its per-node likelihood matrices between calls, for a tree that
+ * never changes (a published version). Building those is most of a call's cost on a large tree;
+ * what differs per call (the priors' history and strength, the stop rule) is cheap and applied
+ * fresh each time. Matrices depend on the weight table, the learned likelihoods (by identity) and
+ * whether the unlisted hypothesis is on, so one cache keeps a few such variants.
+ */
+export class ModelCache {
+  private checked: CheckedTree | null = null;
+  private readonly variants = new Map<string, Model>();
+  private readonly likelihoodIds = new WeakMap<object, number>();
+  private nextLikelihoodId = 1;
+
+  constructor(readonly tree: DxTree) {}
+
+  model(tree: DxTree, settings?: DxSettings): Model {
+    if (tree !== this.tree) throw new DiagnosisError("bad_setting", "A model cache serves only the tree it was made for");
+    const resolved = resolveSettings(settings);
+    const key = this.variantKey(resolved);
+    let base = this.variants.get(key);
+    if (base) {
+      this.variants.delete(key);
+    } else {
+      base = modelOf((this.checked ??= checkTree(tree)), resolved);
+    }
+    this.variants.set(key, base); // most recently used last
+    while (this.variants.size > MAX_VARIANTS) this.variants.delete(this.variants.keys().next().value as string);
+    // Shares the indexes, matrices and arena; carries this call's settings.
+    return { ...base, settings: resolved };
+  }
+
+  private variantKey(resolved: ResolvedSettings): string {
+    const w = resolved.weights;
+    let likelihoods = 0;
+    if (Object.keys(resolved.likelihoods).length > 0) {
+      likelihoods = this.likelihoodIds.get(resolved.likelihoods) ?? this.nextLikelihoodId++;
+      this.likelihoodIds.set(resolved.likelihoods, likelihoods);
+    }
+    return `${w.rules_out}|${w.against}|${w.neutral}|${w.for}|${w.strong}|${likelihoods}|${resolved.unlistedShare > 0 ? 1 : 0}`;
+  }
 }
 
 export function nodeAt(model: TreeIndex, nodeId: string): number {
