@@ -270,7 +270,7 @@ export const treeOptions = pgTable(
     dontKnow: boolean("dont_know").notNull().default(false),
     sortOrder: integer("sort_order").notNull().default(0),
   },
-  (t) => [uniqueIndex("tree_options_key").on(t.versionId, t.key), index("tree_options_from_idx").on(t.fromNodeId)],
+  (t) => [uniqueIndex("tree_options_key").on(t.versionId, t.key), index("tree_options_from_idx").on(t.fromNodeId), index("tree_options_to_idx").on(t.toNodeId)],
 );
 export type TreeOption = typeof treeOptions.$inferSelect;
 
@@ -353,7 +353,8 @@ export const caseSteps = pgTable(
     /** What the screen showed after this answer: causes, unlisted share, suggestions, conclusion. */
     ranking: jsonb("ranking").notNull(),
   },
-  (t) => [uniqueIndex("case_steps_seq_key").on(t.caseId, t.seq)],
+  // The node and option indexes let a draft's nodes and options be deleted without scanning every step.
+  (t) => [uniqueIndex("case_steps_seq_key").on(t.caseId, t.seq), index("case_steps_node_idx").on(t.nodeId), index("case_steps_option_idx").on(t.optionId)],
 );
 export type CaseStep = typeof caseSteps.$inferSelect;
 
