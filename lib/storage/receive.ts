@@ -25,9 +25,12 @@ async function assertMayLink(user: SessionUser, caseId: number | null, writeupId
     if (!mayEditWriteup(user, w)) throw new AppError("forbidden", "You may not add photos to that write-up.");
   }
   if (caseId !== null) {
-    const [c] = await db.select({ id: cases.id }).from(cases).where(eq(cases.id, caseId)).limit(1);
+    const [c] = await db.select({ reference: cases.reference, status: cases.status }).from(cases).where(eq(cases.id, caseId)).limit(1);
     if (!c) throw new AppError("not_found", "That case does not exist.");
     if (!may(user.role, "case:work")) throw new AppError("forbidden", "You may not add photos to cases.");
+    if (c.status === "closed") {
+      throw new AppError("conflict", `Case ${c.reference} is closed and its bench record is frozen; a senior mechanic can reopen it to add photos.`);
+    }
   }
 }
 
