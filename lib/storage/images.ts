@@ -10,11 +10,16 @@ export interface PhotoFacts {
   width: number;
   height: number;
   thumbnail: Buffer;
+  /** The photo to keep: the upload itself, or, when it carried EXIF, XMP or IPTC data, a re-encoded copy without it. */
+  original: Uint8Array;
 }
 
 /**
  * Decodes a photo (already sniffed as JPEG, PNG or WebP): its displayed size, after the EXIF
- * orientation, and a 320 px wide WebP thumbnail. A file sharp cannot decode is refused (415).
+ * orientation, a 320 px wide WebP thumbnail, and the original to keep. Phones write the place a
+ * photo was taken (and the device) into its metadata; a shop's photos of a customer's unit must not
+ * carry the customer's whereabouts, so such a photo is kept re-encoded, turned upright, without it.
+ * A file sharp cannot decode is refused (415).
  */
 export async function examinePhoto(bytes: Uint8Array): Promise<PhotoFacts> {
   try {
@@ -27,10 +32,19 @@ export async function examinePhoto(bytes: Uint8Array): Promise<PhotoFacts> {
       .resize({ width: THUMB_WIDTH, withoutEnlargement: true })
       .webp({ quality: 78 })
       .toBuffer();
-    return { width: swapped ? meta.height : meta.width, height: swapped ? meta.width : meta.height, thumbnail };
+    const original = meta.exif || meta.xmp || meta.iptc ? await withoutMetadata(bytes, meta.format) : bytes;
+    return { width: swapped ? meta.height : meta.width, height: swapped ? meta.width : meta.height, thumbnail, original };
   } catch {
     throw new AppError("unsupported", "That photo could not be read; it may be damaged. Try exporting it again as JPEG or PNG.");
   }
+}
+
+/** Re-encodes in the same format; sharp writes no metadata unless asked to. */
+async function withoutMetadata(bytes: Uint8Array, format: string | undefined): Promise<Buffer> {
+  const upright = sharp(bytes, { limitInputPixels: MAX_PIXELS }).rotate();
+  if (format === "jpeg") return upright.jpeg({ quality: 92, mozjpeg: true }).toBuffer();
+  if (format === "webp") return upright.webp({ quality: 90 }).toBuffer();
+  return upright.png().toBuffer();
 }
 
 /** Rasterises trusted SVG artwork (the demo content's drawings) to PNG; SVG itself is never served. */

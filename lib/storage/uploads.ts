@@ -55,13 +55,13 @@ export async function storePhoto(input: NewPhoto, conn: Db | Tx = db): Promise<U
   const facts = await examinePhoto(input.bytes);
   const store = blobStore();
   const storageKey = input.storageKey ?? newStorageKey("photos");
-  await store.put(storageKey, input.bytes, { contentType: mime });
+  await store.put(storageKey, facts.original, { contentType: mime });
   await store.put(thumbKeyOf(storageKey), facts.thumbnail, { contentType: THUMB_MIME });
   try {
     const [row] = await conn
       .insert(uploads)
       .values({
-        id: newUploadId(), storageKey, originalName: name, mime, bytes: input.bytes.byteLength, width: facts.width, height: facts.height,
+        id: newUploadId(), storageKey, originalName: name, mime, bytes: facts.original.byteLength, width: facts.width, height: facts.height,
         uploadedBy: input.uploadedBy, caseId: input.caseId ?? null, writeupId: input.writeupId ?? null,
       })
       .returning();

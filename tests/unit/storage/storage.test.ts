@@ -90,6 +90,27 @@ describe("photo facts and thumbnails", () => {
     expect([thumb.format, thumb.width, thumb.height]).toEqual(["webp", 320, 213]);
   });
 
+  it("keeps a photo without metadata byte for byte, and strips the location and camera data of one that has it", async () => {
+    const plain = await sharp({ create: { width: 400, height: 300, channels: 3, background: "#7a5230" } }).jpeg().toBuffer();
+    expect(Buffer.from((await examinePhoto(plain)).original).equals(plain)).toBe(true);
+
+    // As a phone writes it: GPS position, device, and an orientation of 6 (turned 90° clockwise).
+    const tagged = await sharp({ create: { width: 400, height: 300, channels: 3, background: "#7a5230" } })
+      .withMetadata({ orientation: 6 })
+      .withExif({ IFD0: { Make: "Invented Phone Co", Model: "Demo 1" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "52/1 22/1 0/1" } })
+      .jpeg().toBuffer();
+    expect((await sharp(tagged).metadata()).orientation).toBe(6);
+    expect(tagged.includes("Invented Phone Co")).toBe(true);
+    const facts = await examinePhoto(tagged);
+    const kept = await sharp(facts.original).metadata();
+    expect(kept.exif).toBeUndefined();
+    expect(kept.format).toBe("jpeg");
+    expect(Buffer.from(facts.original).includes("Invented Phone Co")).toBe(false);
+    // Turned upright, so it shows the same way without the orientation tag.
+    expect([kept.width, kept.height]).toEqual([300, 400]);
+    expect([facts.width, facts.height]).toEqual([300, 400]);
+  });
+
   it("does not enlarge a small photo, and refuses a damaged one with 415", async () => {
     const small = await sharp({ create: { width: 100, height: 50, channels: 3, background: "#000" } }).jpeg().toBuffer();
     expect((await sharp((await examinePhoto(small)).thumbnail).metadata()).width).toBe(100);
