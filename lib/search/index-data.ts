@@ -4,6 +4,7 @@ import { db } from "@/db";
 import { indexEtag } from "./etag";
 import { markdownToPlainText } from "./plain-text";
 import type { SearchDoc, WriteupIndexPayload } from "./types";
+import { serializeIndex } from "./writeup-index";
 
 /** Count and latest change of the published write-ups: one indexed query, cheap enough for every request. */
 export async function writeupIndexVersion(): Promise<{ count: number; maxUpdatedAt: Date | null }> {
@@ -58,7 +59,7 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
     tags: r.tags,
     publishedAt: r.published_at ? new Date(r.published_at).toISOString() : null,
   }));
-  return { version: indexEtag({ count: rows.length, maxUpdatedAt }), docs };
+  return { version: indexEtag({ count: rows.length, maxUpdatedAt }), docs, index: serializeIndex(docs) };
 }
 
 // The last body built, by version: an unchanged corpus is neither queried nor serialised again.

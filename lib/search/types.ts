@@ -1,3 +1,5 @@
+import type MiniSearch from "minisearch";
+
 /** One published write-up as the search index sees it (GET /api/writeups/index). */
 export interface SearchDoc {
   id: number;
@@ -14,10 +16,15 @@ export interface SearchDoc {
   publishedAt: string | null;
 }
 
+/** MiniSearch's own serialisation of an index (MiniSearch#toJSON), opaque to us. */
+export type SerializedIndex = ReturnType<MiniSearch["toJSON"]>;
+
 export interface WriteupIndexPayload {
   /** The ETag the server sent with these documents; equal versions mean equal documents. */
   version: string;
   docs: SearchDoc[];
+  /** The search index of exactly these documents, built on the server. */
+  index: SerializedIndex;
 }
 
 export interface SearchFilters {

@@ -1,5 +1,5 @@
-import MiniSearch from "minisearch";
-import type { SearchDoc, SearchFilters } from "./types";
+import MiniSearch, { type Options } from "minisearch";
+import type { SearchDoc, SearchFilters, SerializedIndex } from "./types";
 
 /**
  * The seven searchable parts of a write-up go into four indexed fields, one per weight: fewer fields
@@ -65,22 +65,36 @@ function facet(pairs: [string, string][]): Facet[] {
   return [...byValue.values()].sort((a, b) => a.label.localeCompare(b.label));
 }
 
+const MINI_OPTIONS: Options<SearchDoc> = {
+  fields: [...FIELDS],
+  storeFields: [],
+  extractField: fieldText,
+  searchOptions: { boost: FIELD_BOOSTS, prefix: true, fuzzy: fuzzyDistance },
+};
+
+/** The index of `docs`, built once on the server and sent with them, so a browser loads it instead of building it. */
+export function serializeIndex(docs: readonly SearchDoc[]): SerializedIndex {
+  const mini = new MiniSearch<SearchDoc>(MINI_OPTIONS);
+  mini.addAll(docs);
+  return mini.toJSON();
+}
+
 /** The client-side search over published write-ups: the same code runs in the page and in the tests. */
 export class WriteupIndex {
   private readonly mini: MiniSearch<SearchDoc>;
   private readonly byId: Map<number, SearchDoc>;
   readonly docs: readonly SearchDoc[];
 
-  constructor(docs: readonly SearchDoc[]) {
+  /** From the documents alone (tokenised here), or with the index serializeIndex made of exactly these documents. */
+  constructor(docs: readonly SearchDoc[], serialized?: SerializedIndex) {
     this.docs = docs;
     this.byId = new Map(docs.map((d) => [d.id, d]));
-    this.mini = new MiniSearch<SearchDoc>({
-      fields: [...FIELDS],
-      storeFields: [],
-      extractField: fieldText,
-      searchOptions: { boost: FIELD_BOOSTS, prefix: true, fuzzy: fuzzyDistance },
-    });
-    this.mini.addAll(docs);
+    if (serialized) {
+      this.mini = MiniSearch.loadJS<SearchDoc>(serialized, MINI_OPTIONS);
+    } else {
+      this.mini = new MiniSearch<SearchDoc>(MINI_OPTIONS);
+      this.mini.addAll(docs);
+    }
   }
 
   get size(): number {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { fuzzyDistance, WriteupIndex } from "@/lib/search/writeup-index";
+import { fuzzyDistance, serializeIndex, WriteupIndex } from "@/lib/search/writeup-index";
+import { comparable } from "../../support/search";
 import { doc, DOCS } from "./docs";
 
 const ids = (hits: { doc: { id: number } }[]) => hits.map((h) => h.doc.id);
@@ -77,5 +78,13 @@ describe("write-up search", () => {
   it("allows a fifth of a word's length in edits, rounded up, at most two, none for short words", () => {
     expect([fuzzyDistance("gear"), fuzzyDistance("crank"), fuzzyDistance("bearnig"), fuzzyDistance("waterproofing"), fuzzyDistance("owc")])
       .toEqual([1, 1, 2, 2, 0]);
+  });
+
+  it("loads from the serialised index (as sent over JSON) and answers exactly as when built here", () => {
+    const shipped = new WriteupIndex(DOCS, JSON.parse(JSON.stringify(serializeIndex(DOCS))));
+    for (const q of ["sprag", "bearnig", "needle bea", "crank bear", "water", "zzzz"]) {
+      expect(comparable(shipped.search(q))).toEqual(comparable(index.search(q)));
+      expect(comparable(shipped.search(q, { family: DOCS[0].familySlugs[0] }))).toEqual(comparable(index.search(q, { family: DOCS[0].familySlugs[0] })));
+    }
   });
 });
