@@ -63,18 +63,32 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
 }
 
 // The last body built, by version: an unchanged corpus is neither queried nor serialised again.
-let cached: { etag: string; json: string } | null = null;
+// A build in progress is shared, so requests arriving while it runs wait for the same one.
+let cached: Promise<{ etag: string; json: string }> | null = null;
+let cachedEtag: string | null = null;
 
 /** The current version, cheaply; the body only when asked for, built from the same rows its ETag names. */
 export async function currentWriteupIndex(): Promise<{ etag: string; body: () => Promise<{ etag: string; json: string }> }> {
   const etag = indexEtag(await writeupIndexVersion());
   return {
     etag,
-    body: async () => {
-      if (cached?.etag === etag) return cached;
-      const payload = await writeupIndexDocs();
-      cached = { etag: payload.version, json: JSON.stringify(payload) };
-      return cached;
+    body: () => {
+      if (cached && cachedEtag === etag) return cached;
+      cachedEtag = etag;
+      const building = writeupIndexDocs().then((payload) => ({ etag: payload.version, json: JSON.stringify(payload) }));
+      cached = building;
+      building.catch(() => {
+        if (cached === building) cached = cachedEtag = null;
+      });
+      return building;
     },
   };
+}
+
+/**
+ * Builds the body for the corpus as it is now, in the background: called after a publish, so the
+ * next reader does not wait for the index of every write-up to be built (seconds at 10,000).
+ */
+export function prepareWriteupIndex(): void {
+  void currentWriteupIndex().then((index) => index.body()).catch((error: unknown) => console.error("write-up index build failed", error));
 }

@@ -5,6 +5,7 @@ import { GET } from "@/app/api/writeups/index/route";
 import { uploads, writeups } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import type { WriteupIndexPayload } from "@/lib/search/types";
+import { currentWriteupIndex } from "@/lib/search/index-data";
 import { WriteupIndex } from "@/lib/search/writeup-index";
 import { comparable } from "../../support/search";
 import { publishWriteupAction } from "@/lib/writeups/actions";
@@ -64,6 +65,23 @@ describe("GET /api/writeups/index", () => {
     const payload = (await after.json()) as WriteupIndexPayload;
     expect(payload.version).toBe(after.headers.get("etag"));
     expect(payload.docs.some((d) => d.id === draft.id)).toBe(true);
+  });
+});
+
+describe("the index body on the server", () => {
+  it("is built once per version: readers arriving during a build share it, and a publish starts the next one", async () => {
+    const [a, b] = await Promise.all([currentWriteupIndex(), currentWriteupIndex()]);
+    expect(a.body()).toBe(b.body());
+    const built = await a.body();
+    expect(built.etag).toBe(a.etag);
+
+    const [draft] = await db.select().from(writeups).where(eq(writeups.status, "draft")).limit(1);
+    expect(await executeAction(publishWriteupAction, { id: String(draft.id) }, users.senior)).toMatchObject({ ok: true });
+    const next = await currentWriteupIndex();
+    expect(next.etag).not.toBe(a.etag);
+    // The body for the new version carries the write-up just published.
+    const body = await next.body();
+    expect((JSON.parse(body.json) as WriteupIndexPayload).docs.some((d) => d.id === draft.id)).toBe(true);
   });
 });
 
