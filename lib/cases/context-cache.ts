@@ -8,8 +8,10 @@ export interface StoredCase {
   status: CaseStatus;
   familyId: number;
   treeVersionId: number;
+  /** Recorded steps in order, with database ids. */
   steps: { id: number; seq: number; nodeId: number; optionId: number }[];
   storedSettings: unknown;
+  /** What the settings are computed from; a step is stored only while these are still current. */
   basis: { settingsHash: string | null; likelihoodMode: string };
 }
 

@@ -7,17 +7,9 @@ import { cachedCase, rememberCase, type StoredCase } from "./context-cache";
 import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
 import { familyHistory } from "./history";
 
-export interface CaseContext {
-  id: number;
-  reference: string;
-  status: CaseStatus;
-  familyId: number;
-  treeVersionId: number;
-  /** Recorded steps in order, with database ids. */
-  steps: { id: number; seq: number; nodeId: number; optionId: number }[];
+export interface CaseContext extends Omit<StoredCase, "storedSettings"> {
+  /** The engine's settings, derived from the stored ones and the family's confirmed history. */
   settings: DxSettings;
-  /** What the settings were computed from; a step is stored only while these are still current. */
-  basis: { settingsHash: string | null; likelihoodMode: string };
 }
 
 interface Row {

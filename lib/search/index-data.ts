@@ -59,7 +59,7 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
     tags: r.tags,
     publishedAt: r.published_at ? new Date(r.published_at).toISOString() : null,
   }));
-  return { version: indexEtag({ count: rows.length, maxUpdatedAt }), docs, index: serializeIndex(docs) };
+  return { version: indexEtag({ count: rows.length, maxUpdatedAt }), docs, index: await serializeIndex(docs) };
 }
 
 // The last body built, by version: an unchanged corpus is neither queried nor serialised again.

@@ -72,10 +72,14 @@ const MINI_OPTIONS: Options<SearchDoc> = {
   searchOptions: { boost: FIELD_BOOSTS, prefix: true, fuzzy: fuzzyDistance },
 };
 
-/** The index of `docs`, built once on the server and sent with them, so a browser loads it instead of building it. */
-export function serializeIndex(docs: readonly SearchDoc[]): SerializedIndex {
+/**
+ * The index of `docs`, built once on the server and sent with them, so a browser loads it instead of
+ * building it. Built in chunks that yield to the event loop: at 10,000 write-ups the build takes
+ * seconds, and the one server process must keep answering triage calls meanwhile.
+ */
+export async function serializeIndex(docs: readonly SearchDoc[]): Promise<SerializedIndex> {
   const mini = new MiniSearch<SearchDoc>(MINI_OPTIONS);
-  mini.addAll(docs);
+  await mini.addAllAsync(docs, { chunkSize: 250 });
   return mini.toJSON();
 }
 

@@ -80,8 +80,8 @@ describe("write-up search", () => {
       .toEqual([1, 1, 2, 2, 0]);
   });
 
-  it("loads from the serialised index (as sent over JSON) and answers exactly as when built here", () => {
-    const shipped = new WriteupIndex(DOCS, JSON.parse(JSON.stringify(serializeIndex(DOCS))));
+  it("loads from the serialised index (as sent over JSON) and answers exactly as when built here", async () => {
+    const shipped = new WriteupIndex(DOCS, JSON.parse(JSON.stringify(await serializeIndex(DOCS))));
     for (const q of ["sprag", "bearnig", "needle bea", "crank bear", "water", "zzzz"]) {
       expect(comparable(shipped.search(q))).toEqual(comparable(index.search(q)));
       expect(comparable(shipped.search(q, { family: DOCS[0].familySlugs[0] }))).toEqual(comparable(index.search(q, { family: DOCS[0].familySlugs[0] })));
