@@ -1,4 +1,5 @@
 import MiniSearch, { type Options } from "minisearch";
+import { TopHits } from "./top-hits";
 import type { SearchDoc, SearchFilters, SerializedIndex } from "./types";
 
 /**
@@ -65,7 +66,8 @@ function facet(pairs: [string, string][]): Facet[] {
   return [...byValue.values()].sort((a, b) => a.label.localeCompare(b.label));
 }
 
-const MINI_OPTIONS: Options<SearchDoc> = {
+/** How write-ups are indexed: the server builds with these, the page loads with the same. */
+export const MINI_OPTIONS: Options<SearchDoc> & { fields: string[] } = {
   fields: [...FIELDS],
   storeFields: [],
   extractField: fieldText,
@@ -86,6 +88,7 @@ export async function serializeIndex(docs: readonly SearchDoc[]): Promise<Serial
 /** The client-side search over published write-ups: the same code runs in the page and in the tests. */
 export class WriteupIndex {
   private readonly mini: MiniSearch<SearchDoc>;
+  private readonly top: TopHits | null;
   private readonly byId: Map<number, SearchDoc>;
   readonly docs: readonly SearchDoc[];
 
@@ -99,6 +102,7 @@ export class WriteupIndex {
       this.mini = new MiniSearch<SearchDoc>(MINI_OPTIONS);
       this.mini.addAll(docs);
     }
+    this.top = TopHits.attach(this.mini, FIELDS, FIELD_BOOSTS);
   }
 
   get size(): number {
@@ -110,14 +114,6 @@ export class WriteupIndex {
    * any word may. An empty query lists the filtered write-ups, newest first.
    */
   search(query: string, filters: SearchFilters = {}, limit = 50): WriteupHit[] {
-    // No filter chosen: no per-result callback (it costs when a common word matches thousands).
-    const filtered = !!(filters.family || filters.cause || filters.tag);
-    const filter = filtered
-      ? (result: { id: number }) => {
-          const doc = this.byId.get(result.id);
-          return !!doc && matchesFilters(doc, filters);
-        }
-      : undefined;
     if (!query.trim()) {
       return this.docs
         .filter((doc) => matchesFilters(doc, filters))
@@ -127,15 +123,30 @@ export class WriteupIndex {
     }
     // Cheapest first: exact and prefix matches of every word; near misses (fuzzy) only when those
     // find less than a page, which is when a typo is the likely reason; any word only as a last resort.
-    let results = this.mini.search(query, { combineWith: "AND", filter, fuzzy: false });
-    if (results.length < FUZZY_BELOW) results = this.mini.search(query, { combineWith: "AND", filter });
-    if (results.length === 0) results = this.mini.search(query, { combineWith: "OR", filter });
-    return results.slice(0, limit).map((r) => ({
-      doc: this.byId.get(r.id)!,
-      score: r.score,
-      terms: r.terms,
-      fields: [...new Set(Object.values(r.match).flat())],
-    }));
+    const keep = this.keepFor(filters);
+    let found = this.query(query, "AND", false, keep, limit);
+    if (found.total < FUZZY_BELOW) found = this.query(query, "AND", fuzzyDistance, keep, limit);
+    if (found.total === 0) found = this.query(query, "OR", fuzzyDistance, keep, limit);
+    return found.hits.map((hit) => ({ doc: this.byId.get(hit.id)!, score: hit.score, terms: hit.terms, fields: hit.fields }));
+  }
+
+  private keepFor(filters: SearchFilters): ((id: number) => boolean) | undefined {
+    // No filter chosen: no per-result callback (it costs when a common word matches thousands).
+    if (!filters.family && !filters.cause && !filters.tag) return undefined;
+    return (id: number) => {
+      const doc = this.byId.get(id);
+      return !!doc && matchesFilters(doc, filters);
+    };
+  }
+
+  /** The best `limit` matches and how many there are: through TopHits, or MiniSearch's own search when it cannot. */
+  private query(query: string, combineWith: "AND" | "OR", fuzzy: typeof fuzzyDistance | false, keep: ((id: number) => boolean) | undefined, limit: number) {
+    if (this.top?.usable) return this.top.search(query, { combineWith, fuzzy, prefix: true, filter: keep, limit });
+    const results = this.mini.search(query, { combineWith, fuzzy, filter: keep ? (r) => keep(r.id) : undefined });
+    return {
+      total: results.length,
+      hits: results.slice(0, limit).map((r) => ({ id: r.id as number, score: r.score, terms: r.terms, fields: [...new Set(Object.values(r.match).flat())] })),
+    };
   }
 
   /** How many write-ups there are for each motor family, cause and tag: the filter choices. */
