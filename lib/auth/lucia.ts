@@ -7,9 +7,10 @@ import { sessions, users, type Role } from "@/db/schema";
 const adapter = new DrizzlePostgreSQLAdapter(db, sessions, users);
 
 export const SESSION_COOKIE = "rb_session";
+export const SESSION_LIFETIME = new TimeSpan(14, "d");
 
 export const lucia = new Lucia(adapter, {
-  sessionExpiresIn: new TimeSpan(14, "d"),
+  sessionExpiresIn: SESSION_LIFETIME,
   sessionCookie: {
     name: SESSION_COOKIE,
     expires: true,

@@ -1,5 +1,6 @@
 import "server-only";
 import { sql } from "@/db";
+import { callerRow, type CallerCheck } from "@/lib/auth/caller-check";
 import type { CaseContext } from "./context";
 import { DIAGNOSIS_SETTINGS_KEY } from "./dx-settings";
 import type { StoredRanking } from "./ranking-types";
@@ -8,7 +9,12 @@ export interface InsertedStep {
   id: number;
   seq: number;
   answeredAt: Date;
+  /** The session's expiry, when the statement checked the caller itself. */
+  sessionExpiresAt: Date | null;
 }
+
+/** Who answers: a user the caller already authorised, or a session the statement checks itself. */
+export type StepAuthor = { userId: string } | { caller: CallerCheck };
 
 /**
  * Appends a step in one statement, which is its own transaction. It locks the case row (for
@@ -17,7 +23,9 @@ export interface InsertedStep {
  * computed with (`basis`), and inserts only if the step the ranking was computed after is still
  * the last one (that row is share-locked, so an undo in between makes this insert nothing).
  * unique(case_id, seq) turns two racing answers into one success and one 23505.
- * Returns null when the guard fails. (Raw postgres.js here: drizzle's client leaves json and
+ * With `by.caller`, the statement also finds the caller (callerRow: a live session of an active
+ * user whose role may work cases) and records that user, so authorising and writing take one
+ * round trip. Returns null when any guard fails. (Raw postgres.js here: drizzle's client leaves json and
  * timestamp parameters unserialised, hence the explicit JSON text and epoch milliseconds.)
  */
 export async function appendStep(input: {
@@ -25,14 +33,17 @@ export async function appendStep(input: {
   previous: { id: number; seq: number } | null;
   nodeId: number;
   optionId: number;
-  userId: string;
+  by: StepAuthor;
   ranking: StoredRanking;
   basis: CaseContext["basis"];
 }): Promise<InsertedStep | null> {
   const seq = (input.previous?.seq ?? 0) + 1;
   const previousId = input.previous?.id ?? null;
-  const rows = await sql<{ id: number; seq: number; answered_ms: number }[]>`
-    with open_case as (
+  const author = "caller" in input.by
+    ? callerRow(sql, input.by.caller)
+    : sql`select ${input.by.userId}::text as user_id, null::timestamptz as expires_at`;
+  const rows = await sql<{ id: number; seq: number; answered_ms: number; session_expires_ms: number | null }[]>`
+    with author as (${author}), open_case as (
       select c.id from cases c
       where c.id = ${input.caseId} and c.status = 'open'
         and (select md5(value::text) from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) is not distinct from ${input.basis.settingsHash}::text
@@ -42,11 +53,18 @@ export async function appendStep(input: {
       select id from case_steps where id = ${previousId} and case_id = ${input.caseId} for share
     )
     insert into case_steps (case_id, seq, node_id, option_id, answered_by, ranking)
-    select open_case.id, ${seq}, ${input.nodeId}, ${input.optionId}, ${input.userId}, ${JSON.stringify(input.ranking)}::jsonb
-    from open_case
+    select open_case.id, ${seq}, ${input.nodeId}, ${input.optionId}, author.user_id, ${JSON.stringify(input.ranking)}::jsonb
+    from open_case, author
     where (${previousId}::int is null and not exists (select 1 from case_steps where case_id = ${input.caseId}))
        or exists (select 1 from previous)
-    returning id, seq, (extract(epoch from answered_at) * 1000)::float8 as answered_ms`;
+    returning id, seq, (extract(epoch from answered_at) * 1000)::float8 as answered_ms,
+      (select (extract(epoch from expires_at) * 1000)::float8 from author) as session_expires_ms`;
   const row = rows[0];
-  return row ? { id: row.id, seq: row.seq, answeredAt: new Date(row.answered_ms) } : null;
+  if (!row) return null;
+  return {
+    id: row.id,
+    seq: row.seq,
+    answeredAt: new Date(row.answered_ms),
+    sessionExpiresAt: row.session_expires_ms === null ? null : new Date(row.session_expires_ms),
+  };
 }

@@ -1,6 +1,7 @@
 import "server-only";
 import { ModelCache, type DxTree } from "@/lib/diagnosis";
 import { AppError } from "@/lib/errors";
+import { deepFreeze } from "./deep-freeze";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { GraphNode, GraphOption, TreeGraph } from "@/lib/trees/graph-types";
 
@@ -31,14 +32,6 @@ function build(graph: TreeGraph, dx: DxTree): CaseTree {
     optionById: new Map(graph.options.map((o) => [o.id, o])),
     optionByKey: new Map(graph.options.map((o) => [o.key, o])),
   });
-}
-
-function deepFreeze<T>(value: T): T {
-  if (value && typeof value === "object" && !Object.isFrozen(value)) {
-    Object.freeze(value);
-    for (const inner of Object.values(value)) deepFreeze(inner);
-  }
-  return value;
 }
 
 /** The graph of a published tree version, loaded once per process. Drafts are refused. */

@@ -4,7 +4,7 @@ import { db } from "@/db";
 import { cases, caseSteps } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
-import { answersOf, assertOpen, rankingFor } from "./answer";
+import { anticipateForCase, answersOf, assertOpen, rankingFor } from "./answer";
 import { loadCaseContext } from "./context";
 import { rememberUndone } from "./context-cache";
 import { undoInput } from "./inputs";
@@ -33,8 +33,9 @@ export async function undoLastStep(caseId: number, seq: number): Promise<UndoneS
     return { removedId: last.id, ranking: before ? (before.ranking as StoredRanking) : null };
   });
   rememberUndone(caseId, previous.removedId);
-  if (previous.ranking) return { removedSeq: seq, ranking: previous.ranking };
-  return { removedSeq: seq, ranking: await startingRanking(caseId) };
+  const ranking = previous.ranking ?? (await startingRanking(caseId));
+  anticipateForCase(caseId, ranking).catch(() => {});
+  return { removedSeq: seq, ranking };
 }
 
 /** The ranking before any answer: priors only, from the shop's history for the motor family. */

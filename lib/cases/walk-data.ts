@@ -1,6 +1,7 @@
 import "server-only";
 import type { WalkProps } from "./walk-types";
 import { answersOf, rankingFor } from "./answer";
+import { anticipate } from "./anticipated-rankings";
 import { causesBySlug } from "./catalogue";
 import { loadCaseContext } from "./context";
 import { caseHeader, caseStepRows } from "./queries";
@@ -16,6 +17,10 @@ export async function loadWalk(caseId: number): Promise<{ status: string; props:
   const keyOf = (s: { nodeId: number; optionId: number }) => ({
     nodeKey: tree.nodeById.get(s.nodeId)?.key ?? "", optionKey: tree.optionById.get(s.optionId)?.key ?? "",
   });
+  const steps = stepRows.map((s) => ({ id: s.id, seq: s.seq, ...keyOf(s), ranking: s.ranking as StoredRanking }));
+  const startRanking = rankingFor(tree, answersOf(tree, []), ctx);
+  // The technician answers next: have the likely answers' rankings ready by then.
+  if (ctx.status === "open") void anticipate(tree, answersOf(tree, ctx.steps), ctx.settings, steps.at(-1)?.ranking ?? startRanking);
   return {
     status: header.status,
     props: {
@@ -33,8 +38,8 @@ export async function loadWalk(caseId: number): Promise<{ status: string; props:
         slug: c.slug, name: c.name, area: c.area, priceLowCents: c.priceLowCents, priceHighCents: c.priceHighCents, labourMinutes: c.labourMinutes, inspectMinutes: c.inspectMinutes,
       })),
       settings: ctx.settings,
-      steps: stepRows.map((s) => ({ id: s.id, seq: s.seq, ...keyOf(s), ranking: s.ranking as StoredRanking })),
-      startRanking: rankingFor(tree, answersOf(tree, []), ctx),
+      steps,
+      startRanking,
     },
   };
 }
