@@ -29,8 +29,9 @@ export async function tryInOneTrip<S extends z.ZodType, R>(
   let done;
   try {
     done = await spec.inOneTrip(parsed.data, check);
-  } catch {
-    // The ordinary path runs the same work again and reports (and logs) whatever this was.
+  } catch (error) {
+    // Nothing was written; the ordinary path runs the same work again and answers the caller.
+    console.error(`action ${spec.name}: the one-trip path failed, using the ordinary one`, error);
     return null;
   }
   if (!done) return null;
