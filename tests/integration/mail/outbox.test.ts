@@ -71,14 +71,19 @@ describe("the mail outbox", () => {
     expect([1, 2, 3, 4].map(retryDelayMs)).toEqual([30_000, 60_000, 120_000, 240_000]);
     expect(retryDelayMs(20)).toBe(3_600_000);
 
-    const transport = smtpTransport({ host: "127.0.0.1", port: await freePort() });
+    // A server that hangs up on every connection, held for the whole test so no other process can
+    // take its port between attempts (a merely free port can be reused by something that answers).
+    const hangUp = net.createServer((socket) => socket.destroy());
+    await new Promise<void>((resolve) => hangUp.listen(0, "127.0.0.1", resolve));
+    const transport = smtpTransport({ host: "127.0.0.1", port: (hangUp.address() as net.AddressInfo).port });
     const id = await enqueueMail(db, { to: "dealer@example.test", subject: "s", text: "t" });
-    let now = new Date();
+    let now = new Date(Date.now() + 1000); // past the row's own (database clock) next_attempt_at
     for (let attempt = 1; attempt <= MAX_ATTEMPTS; attempt++) {
       const report = await deliverDue(transport, { from: FROM, now });
-      expect(report.failed).toBe(attempt === MAX_ATTEMPTS ? 1 : 0);
+      expect(report, `attempt ${attempt}`).toEqual(attempt === MAX_ATTEMPTS ? { sent: 0, retrying: 0, failed: 1 } : { sent: 0, retrying: 1, failed: 0 });
       now = new Date(now.getTime() + retryDelayMs(attempt));
     }
+    await new Promise<void>((resolve) => hangUp.close(() => resolve()));
     const failed = await message(id);
     expect(failed.status).toBe("failed");
     expect(failed.attempts).toBe(MAX_ATTEMPTS);
