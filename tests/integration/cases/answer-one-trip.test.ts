@@ -1,11 +1,10 @@
 import { asc, eq } from "drizzle-orm";
-import { beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { cases, caseSteps, sessions, users } from "@/db/schema";
 import { executeAction, type ActionResult } from "@/lib/actions/define";
 import { tryInOneTrip } from "@/lib/actions/one-trip";
 import { ALL_ROLES, may, type Role } from "@/lib/auth/roles";
 import { createSession, validateToken } from "@/lib/auth/session";
-import type { SessionUser } from "@/lib/auth/session-user";
 import { hashToken } from "@/lib/auth/token";
 import { answerStepAction, type AnsweredStep } from "@/lib/cases/answer";
 import { familyHistory } from "@/lib/cases/history";
@@ -13,8 +12,7 @@ import type { StoredRanking } from "@/lib/cases/ranking-types";
 import { scoreCauses } from "@/lib/diagnosis";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import { createUser, db } from "../../support/db";
-import { resetToDemo } from "../../support/seed";
-import { idsOf, publishedVersion, startTestCase } from "./helpers";
+import { idsOf, pedalSlipCase } from "./helpers";
 
 const DAY = 24 * 60 * 60 * 1000;
 
@@ -28,34 +26,22 @@ async function answerAs(token: string | undefined, input: Record<string, unknown
 // The triage screen's answer goes in one round trip: the step insert itself checks the session
 // and the role. It must let in exactly whom the ordinary path lets in, and write nothing otherwise.
 describe("the answer action in one trip", () => {
-  let tech: SessionUser;
-  let techToken: string;
-  let versionId: number;
-  let caseId: number;
-  beforeAll(async () => {
-    await resetToDemo();
-    tech = await createUser("tech");
-    techToken = (await createSession(tech.id)).token;
-    versionId = await publishedVersion("pedal-slip");
-  });
-  beforeEach(async () => {
-    caseId = (await startTestCase(tech)).id;
-  });
-  const steps = () => db.select().from(caseSteps).where(eq(caseSteps.caseId, caseId)).orderBy(asc(caseSteps.seq));
+  const c = pedalSlipCase();
+  const steps = () => db.select().from(caseSteps).where(eq(caseSteps.caseId, c.caseId)).orderBy(asc(caseSteps.seq));
   const input = async (nodeKey = "q-what", label = "Pedals spin forward") => {
-    const ids = await idsOf(versionId, nodeKey, label);
-    return { caseId, nodeId: ids.nodeId, optionId: ids.optionId };
+    const ids = await idsOf(c.versionId, nodeKey, label);
+    return { caseId: c.caseId, nodeId: ids.nodeId, optionId: ids.optionId };
   };
 
   it("a technician's answer is stored in one trip, by them, with the ranking the engine gives", async () => {
-    const { quick, result } = await answerAs(techToken, await input());
+    const { quick, result } = await answerAs(c.token, await input());
     expect(quick).toBe(true);
     expect(result.ok).toBe(true);
     const [step] = await steps();
-    expect(step.answeredBy).toBe(tech.id);
-    const [kase] = await db.select().from(cases).where(eq(cases.id, caseId));
-    const dx = toDxTree((await loadGraph(versionId))!);
-    const expected = scoreCauses(dx, [{ nodeId: "q-what", optionId: (await idsOf(versionId, "q-what", "Pedals spin forward")).optionKey }], { history: await familyHistory(kase.familyId) });
+    expect(step.answeredBy).toBe(c.tech.id);
+    const [kase] = await db.select().from(cases).where(eq(cases.id, c.caseId));
+    const dx = toDxTree((await loadGraph(c.versionId))!);
+    const expected = scoreCauses(dx, [{ nodeId: "q-what", optionId: (await idsOf(c.versionId, "q-what", "Pedals spin forward")).optionKey }], { history: await familyHistory(kase.familyId) });
     expect((step.ranking as StoredRanking).causes).toEqual(expected.causes);
     if (result.ok) expect(result.data.ranking).toEqual(step.ranking);
   });
@@ -104,7 +90,7 @@ describe("the answer action in one trip", () => {
 
   it("bad input or a closed case: nothing in one trip, the ordinary path's clear error, nothing written", async () => {
     const own = await input();
-    const other = await idsOf(versionId, "q-onset", "Suddenly");
+    const other = await idsOf(c.versionId, "q-onset", "Suddenly");
     const cases_: [Record<string, unknown>, number][] = [
       [{ ...own, optionId: 999999 }, 422],
       [{ ...own, optionId: other.optionId }, 422],
@@ -112,22 +98,22 @@ describe("the answer action in one trip", () => {
       [{ ...own, nodeId: "one" }, 400],
     ];
     for (const [bad, status] of cases_) {
-      const { quick, result } = await answerAs(techToken, bad);
+      const { quick, result } = await answerAs(c.token, bad);
       expect(quick).toBe(false);
       expect(!result.ok && result.status, JSON.stringify(bad)).toBe(status);
     }
-    await db.update(cases).set({ status: "closed", closedAt: new Date() }).where(eq(cases.id, caseId));
-    const closed = await answerAs(techToken, own);
+    await db.update(cases).set({ status: "closed", closedAt: new Date() }).where(eq(cases.id, c.caseId));
+    const closed = await answerAs(c.token, own);
     expect(closed.quick).toBe(false);
     expect(!closed.result.ok && closed.result.status).toBe(409);
     expect(await steps()).toEqual([]);
   });
 
   it("a step removed behind the remembered case's back: the one trip refuses, the ordinary path lands the answer after what is stored", async () => {
-    await answerAs(techToken, await input());
-    await answerAs(techToken, await input("q-onset", "Suddenly"));
-    await db.delete(caseSteps).where(eq(caseSteps.caseId, caseId)); // as another server process's undo would, twice
-    const { quick, result } = await answerAs(techToken, await input("q-cold", "No difference"));
+    await answerAs(c.token, await input());
+    await answerAs(c.token, await input("q-onset", "Suddenly"));
+    await db.delete(caseSteps).where(eq(caseSteps.caseId, c.caseId)); // as another server process's undo would, twice
+    const { quick, result } = await answerAs(c.token, await input("q-cold", "No difference"));
     expect(quick).toBe(false);
     expect(result.ok).toBe(true);
     expect((await steps()).map((s) => s.seq)).toEqual([1]);

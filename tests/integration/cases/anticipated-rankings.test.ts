@@ -1,8 +1,7 @@
 import { asc, eq } from "drizzle-orm";
-import { beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { caseSteps } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
-import type { SessionUser } from "@/lib/auth/session-user";
 import { anticipateForCase, answersOf, answerStepAction } from "@/lib/cases/answer";
 import { anticipatedRanking, forgetAnticipated, likelyNextQuestions } from "@/lib/cases/anticipated-rankings";
 import { loadCaseContext } from "@/lib/cases/context";
@@ -10,38 +9,27 @@ import { computeRanking } from "@/lib/cases/ranking";
 import type { StoredRanking } from "@/lib/cases/ranking-types";
 import { publishedTree } from "@/lib/cases/tree-cache";
 import { walkPath } from "@/lib/diagnosis";
-import { createUser, db } from "../../support/db";
-import { resetToDemo } from "../../support/seed";
-import { idsOf, publishedVersion, startTestCase } from "./helpers";
+import { db } from "../../support/db";
+import { idsOf, pedalSlipCase } from "./helpers";
 
 // While the caller thinks, the server scores the answers they are likely to give next. Using such a
 // ranking must never change what is stored: it is the engine's result for the very same inputs.
 describe("rankings worked out ahead", () => {
-  let tech: SessionUser;
-  let versionId: number;
-  let caseId: number;
-  beforeAll(async () => {
-    await resetToDemo();
-    tech = await createUser("tech");
-    versionId = await publishedVersion("pedal-slip");
-  });
-  beforeEach(async () => {
-    caseId = (await startTestCase(tech)).id;
-    forgetAnticipated();
-  });
+  const c = pedalSlipCase();
+  beforeEach(forgetAnticipated);
 
   async function answer(nodeKey: string, label: string) {
-    const ids = await idsOf(versionId, nodeKey, label);
-    const result = await executeAction(answerStepAction, { caseId, nodeId: ids.nodeId, optionId: ids.optionId }, tech);
+    const ids = await idsOf(c.versionId, nodeKey, label);
+    const result = await executeAction(answerStepAction, { caseId: c.caseId, nodeId: ids.nodeId, optionId: ids.optionId }, c.tech);
     if (!result.ok) throw new Error(JSON.stringify(result));
     return result.data;
   }
 
   it("every option of the tree's next question and the top suggestions is scored as the engine scores it", async () => {
     const first = await answer("q-what", "Pedals spin forward");
-    await anticipateForCase(caseId, first.ranking); // alongside what the answer scheduled; either may score an option
+    await anticipateForCase(c.caseId, first.ranking); // alongside what the answer scheduled; either may score an option
 
-    const ctx = (await loadCaseContext(caseId))!;
+    const ctx = (await loadCaseContext(c.caseId))!;
     const tree = await publishedTree(ctx.treeVersionId);
     const answers = answersOf(tree, ctx.steps);
     const questions = likelyNextQuestions(tree, answers, first.ranking);
@@ -60,29 +48,29 @@ describe("rankings worked out ahead", () => {
       }
     }
     expect(options).toBeGreaterThan(3);
-    expect(await anticipateForCase(caseId, first.ranking)).toBe(0); // all ready: nothing is scored twice
+    expect(await anticipateForCase(c.caseId, first.ranking)).toBe(0); // all ready: nothing is scored twice
   });
 
   it("the next answer uses the ranking worked out for it, and stores exactly that", async () => {
     const first = await answer("q-what", "Pedals spin forward");
-    await anticipateForCase(caseId, first.ranking);
-    const ctx = (await loadCaseContext(caseId))!;
+    await anticipateForCase(c.caseId, first.ranking);
+    const ctx = (await loadCaseContext(c.caseId))!;
     const tree = await publishedTree(ctx.treeVersionId);
     const nodeKey = walkPath(tree.dx, answersOf(tree, ctx.steps)).current!;
     const option = tree.graph.options.find((o) => o.fromKey === nodeKey)!;
     const ready = anticipatedRanking(tree, [...answersOf(tree, ctx.steps), { nodeId: nodeKey, optionId: option.key }], ctx.settings);
     expect(ready).toBeDefined();
 
-    const result = await executeAction(answerStepAction, { caseId, nodeId: tree.nodeByKey.get(nodeKey)!.id, optionId: option.id }, tech);
+    const result = await executeAction(answerStepAction, { caseId: c.caseId, nodeId: tree.nodeByKey.get(nodeKey)!.id, optionId: option.id }, c.tech);
     expect(result.ok && result.data.ranking).toBe(ready);
-    const stored = await db.select().from(caseSteps).where(eq(caseSteps.caseId, caseId)).orderBy(asc(caseSteps.seq));
+    const stored = await db.select().from(caseSteps).where(eq(caseSteps.caseId, c.caseId)).orderBy(asc(caseSteps.seq));
     expect(stored.at(-1)!.ranking as StoredRanking).toEqual(ready);
   });
 
   it("other settings or other earlier answers find nothing ready", async () => {
     const first = await answer("q-what", "Pedals spin forward");
-    await anticipateForCase(caseId, first.ranking);
-    const ctx = (await loadCaseContext(caseId))!;
+    await anticipateForCase(c.caseId, first.ranking);
+    const ctx = (await loadCaseContext(c.caseId))!;
     const tree = await publishedTree(ctx.treeVersionId);
     const answers = answersOf(tree, ctx.steps);
     const nodeKey = walkPath(tree.dx, answers).current!;

@@ -1,10 +1,13 @@
 import { eq } from "drizzle-orm";
+import { beforeAll, beforeEach } from "vitest";
 import { executeAction } from "@/lib/actions/define";
+import { createSession } from "@/lib/auth/session";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { startCaseAction } from "@/lib/cases/start";
 import { motorFamilies, trees, treeVersions } from "@/db/schema";
 import { loadGraph } from "@/lib/trees/graph";
-import { db } from "../../support/db";
+import { createUser, db } from "../../support/db";
+import { resetToDemo } from "../../support/seed";
 
 export async function familyId(slug: string): Promise<number> {
   const [row] = await db.select({ id: motorFamilies.id }).from(motorFamilies).where(eq(motorFamilies.slug, slug));
@@ -36,4 +39,28 @@ export async function startTestCase(user: SessionUser, overrides: Record<string,
   const result = await executeAction(startCaseAction, input, user);
   if (!result.ok) throw new Error(`start failed: ${JSON.stringify(result)}`);
   return result.data;
+}
+
+export interface PedalSlipFixture {
+  tech: SessionUser;
+  /** A session token of `tech`, for paths that read the cookie. */
+  token: string;
+  versionId: number;
+  /** A fresh open case on the pedal-slip tree, started by `tech` before each test. */
+  caseId: number;
+}
+
+/** Registers the usual hooks: the demo database and a technician once, a new pedal-slip case before each test. */
+export function pedalSlipCase(): PedalSlipFixture {
+  const fixture = {} as PedalSlipFixture;
+  beforeAll(async () => {
+    await resetToDemo();
+    fixture.tech = await createUser("tech");
+    fixture.token = (await createSession(fixture.tech.id)).token;
+    fixture.versionId = await publishedVersion("pedal-slip");
+  });
+  beforeEach(async () => {
+    fixture.caseId = (await startTestCase(fixture.tech)).id;
+  });
+  return fixture;
 }
