@@ -36,3 +36,4 @@ export { validateTree } from "./validate";
 export { learnLikelihoods } from "./learn";
 export { wilsonInterval, rankingScores, topKAccuracy, Z_95 } from "./statistics";
 export { walkPath } from "./path";
+export { kaplanMeier, logRank, type SurvivalObservation, type KaplanMeierStep } from "./survival";
