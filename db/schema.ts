@@ -333,6 +333,8 @@ export const cases = pgTable(
     index("cases_technician_idx").on(t.technicianId),
     index("cases_serial_idx").on(t.serial),
     index("cases_version_idx").on(t.treeVersionId),
+    // A unit's visits in order, with what return-free follow-up reads, so it never sorts the whole table.
+    index("cases_visits_idx").on(t.familyId, t.serial, t.createdAt, t.id, t.status, t.closedAt, t.ridingUse).where(sql`${t.serial} <> ''`),
     check("cases_status_check", sql`${t.status} in (${inList(CASE_STATUSES)})`),
     check("cases_caller_kind_check", sql`${t.callerKind} in (${inList(CALLER_KINDS)})`),
     check("cases_riding_use_check", sql`${t.ridingUse} in (${inList(RIDING_USES)})`),
@@ -409,6 +411,22 @@ export const outcomeParts = pgTable(
     primaryKey({ columns: [t.caseId, t.partId] }),
     index("outcome_parts_part_idx").on(t.partId),
     check("outcome_parts_qty_check", sql`${t.quantity} > 0`),
+  ],
+);
+
+/** Upgrades the shop fits beyond the repair; names and the cause group each guards are in lib/survival/upgrades.ts. */
+export const UPGRADE_KINDS = ["uprated-clutch", "crank-seal-barrier", "sealed-bearings", "sealed-screws", "conformal-coating", "cable-sleeve"] as const;
+export type UpgradeKind = (typeof UPGRADE_KINDS)[number];
+
+export const outcomeUpgrades = pgTable(
+  "outcome_upgrades",
+  {
+    caseId: integer("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
+    upgrade: text("upgrade").$type<UpgradeKind>().notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.caseId, t.upgrade] }),
+    check("outcome_upgrades_upgrade_check", sql`${t.upgrade} in (${inList(UPGRADE_KINDS)})`),
   ],
 );
 

@@ -2,6 +2,7 @@ import Link from "next/link";
 import { createColumnHelper } from "@tanstack/react-table";
 import type { CaseListRow, CaseSort } from "@/lib/cases/cases-key";
 import { StatusBadge } from "./status-badge";
+import { WarrantyFlag } from "@/components/survival/warranty-flag";
 
 const col = createColumnHelper<CaseListRow>();
 const day = (iso: string) => iso.slice(0, 10);
@@ -15,7 +16,10 @@ export const caseColumns = [
   col.accessor("callerName", { id: "callerName", header: "Caller", cell: (c) => <>{c.getValue()} <span className="text-xs text-ink-faint">{c.row.original.callerKind}</span></> }),
   col.accessor("familyName", { id: "family", header: "Motor family" }),
   col.accessor("symptom", { id: "symptom", header: "Symptom" }),
-  col.accessor("status", { id: "status", header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
+  col.accessor("status", {
+    id: "status", header: "Status",
+    cell: (c) => <><StatusBadge status={c.getValue()} /><WarrantyFlag repairReference={c.row.original.warrantyOf} /></>,
+  }),
   col.accessor("technicianName", { id: "technician", header: "Technician", cell: (c) => c.getValue() ?? "—" }),
   col.accessor("likelyCause", {
     id: "likely", header: "Likely at triage", enableSorting: false,

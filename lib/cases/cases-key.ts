@@ -20,6 +20,8 @@ export interface CaseListRow {
   likelyProbability: number | null;
   createdAt: string;
   triagedAt: string | null;
+  /** Reference of the repair this visit comes back under warranty from. */
+  warrantyOf: string | null;
 }
 
 export interface CaseListPage {

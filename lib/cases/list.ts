@@ -3,6 +3,7 @@ import { and, asc, desc, eq, gte, ilike, lt, or, sql, type SQL } from "drizzle-o
 import { db } from "@/db";
 import { cases, motorFamilies, users } from "@/db/schema";
 import type { CaseListPage, CaseSort } from "./cases-key";
+import { loadWarrantyMonths, warrantyRepairOf } from "@/lib/survival/warranty";
 import type { CaseListQuery } from "./list-query";
 
 const likely = sql<string | null>`(select k.name from jsonb_each_text(${cases.finalRanking}) r join causes k on k.slug = r.key
@@ -40,11 +41,13 @@ export async function listCases(query: CaseListQuery): Promise<CaseListPage> {
   const where = filters.length ? and(...filters) : undefined;
   const order = query.dir === "asc" ? asc : desc;
 
+  const warrantyMonths = await loadWarrantyMonths();
   const [rows, [{ total }]] = await Promise.all([
     db.select({
       id: cases.id, reference: cases.reference, status: cases.status, callerName: cases.callerName, callerKind: cases.callerKind,
       familyName: sql<string>`${motorFamilies.name} || ' ' || ${motorFamilies.generation}`, symptom: cases.symptom,
       technicianName: users.name, likelyCause: likely, likelyProbability: likelyP, createdAt: cases.createdAt, triagedAt: cases.triagedAt,
+      warrantyOf: warrantyRepairOf(warrantyMonths),
     })
       .from(cases)
       .innerJoin(motorFamilies, eq(motorFamilies.id, cases.familyId))

@@ -1,6 +1,6 @@
 import { eq, sql } from "drizzle-orm";
 import type { Tx } from "@/db";
-import { caseEvents, caseOutcomes, cases, caseSteps, outcomeCauses, outcomeParts } from "@/db/schema";
+import { caseEvents, caseOutcomes, cases, caseSteps, outcomeCauses, outcomeParts, outcomeUpgrades } from "@/db/schema";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import type { SimCase } from "./simulate";
 
@@ -67,6 +67,8 @@ export async function insertHistory(tx: Tx, sims: SimCase[], ids: HistoryIds): P
       return [...merged].map(([slug, quantity]) => ({ caseId: id, partId: ids.partId.get(slug)!, quantity }));
     });
     if (partRows.length) await tx.insert(outcomeParts).values(partRows);
+    const upgradeRows = batch.flatMap(({ s, id }) => s.outcome!.upgradeKinds.map((upgrade) => ({ caseId: id, upgrade })));
+    if (upgradeRows.length) await tx.insert(outcomeUpgrades).values(upgradeRows);
   }
 
   const events = sims.flatMap((s, i) => {

@@ -5,6 +5,8 @@ import { finalRankingOf } from "@/lib/cases/ranking-types";
 import type { Cause, Scenario } from "@/lib/content/catalogue";
 import { callerContact, callerName, serialFor } from "./names";
 import { Random } from "./random";
+import { ReturnSchedule, upgradesText, type ScheduledReturn } from "./returns";
+import type { UpgradeKind } from "@/db/schema";
 
 export interface SimTree {
   slug: string;
@@ -44,6 +46,7 @@ export interface SimCase {
     parts: { slug: string; quantity: number }[];
     labourMinutes: number;
     upgrades: string;
+    upgradeKinds: UpgradeKind[];
     notes: string;
   } | null;
   /** Index (in the returned array) of the earlier case of the same serial, when this unit came back. */
@@ -58,18 +61,6 @@ export interface SimulationInput {
   /** The last day of the simulated period (cases run back `scenario.months` from here). */
   anchor: Date;
 }
-
-const UPGRADES: Record<string, string> = {
-  clutch: "Uprated one-way clutch fitted",
-  seal: "Outer crank seal and grease barrier added",
-  bearing: "Sealed bearings fitted, housing dried and re-greased",
-  housing: "Housing screws sealed with thread sealant",
-  electronics: "Board conformal-coated after cleaning",
-  drive_train: "",
-  sensor: "",
-  cable: "Cable re-routed with a protective sleeve",
-  firmware: "",
-};
 
 const DAY = 86_400_000;
 
@@ -161,13 +152,16 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
     return `WD-${yymm}-${String(n).padStart(4, "0")}`;
   };
 
-  const drawCase = (createdAt: Date) => {
-    const [familySlug, family] = rng.weighted(families.map(([slug, f]) => [[slug, f] as const, f.caseShare] as const));
-    const ridingUse = rng.weighted(Object.entries(family.ridingUse) as [SimCase["ridingUse"], number][]);
+  // A unit coming back (see ./returns) keeps its family, riding use and serial; its fault was drawn when it was scheduled.
+  const drawCase = (createdAt: Date, back: ScheduledReturn | null = null) => {
+    const [familySlug, family] = back
+      ? [back.familySlug, scenario.families[back.familySlug]] as const
+      : rng.weighted(families.map(([slug, f]) => [[slug, f] as const, f.caseShare] as const));
+    const ridingUse = back ? back.ridingUse as SimCase["ridingUse"] : rng.weighted(Object.entries(family.ridingUse) as [SimCase["ridingUse"], number][]);
     const month = createdAt.getUTCMonth() + 1;
     const wet = scenario.water.wetMonths.includes(month);
     const useFactors = scenario.ridingUseFactors[ridingUse] ?? {};
-    const trueCause = rng.weighted(Object.entries(family.causeRates).map(([slug, rate]) => {
+    const trueCause = back ? back.trueCause : rng.weighted(Object.entries(family.causeRates).map(([slug, rate]) => {
       let w = rate * (useFactors[slug] ?? 1);
       if (wet && scenario.water.causes.includes(slug)) w *= scenario.water.boost;
       return [slug, w] as const;
@@ -181,9 +175,11 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
     return { familySlug, ridingUse, trueCause, tree, callerKind, name, ...callerContact(rng, name) };
   };
 
+  const returns = new ReturnSchedule(scenario.seed + 19, scenario, causeBySlug, anchor);
   for (const t of createdTimes) {
     const createdAt = new Date(t);
-    const d = drawCase(createdAt);
+    const back = returns.due(t);
+    const d = drawCase(createdAt, back);
     const settings: DxSettings = { history: { ...(history.get(d.familySlug) ?? {}) } };
     const steps = walkAsCaller(rng, d.tree.dx, actualBySlug.get(d.tree.slug)!, d.trueCause, scenario, createdAt, settings);
     const last = steps.at(-1)?.ranking ?? rankingFor(d.tree.dx, [], settings);
@@ -192,14 +188,16 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
     // Units that come back: the same serial within 90 days of an earlier visit.
     const key = d.familySlug;
     const earlier = (lastBySerialFamily.get(key) ?? []).filter((e) => t - e.at < 80 * DAY);
-    const repeat = earlier.length > 0 && rng.chance(0.03) ? rng.pick(earlier) : null;
-    const serial = repeat?.serial ?? serialFor(rng, d.familySlug);
+    const repeat = back ? null : earlier.length > 0 && rng.chance(0.03) ? rng.pick(earlier) : null;
+    const serial = back?.serial ?? repeat?.serial ?? serialFor(rng, d.familySlug);
+    const backWithin90 = back && t - out[back.repairIndex].createdAt.getTime() < 90 * DAY ? back.repairIndex : null;
 
     const advisedOnly = rng.chance(0.07);
     const cause = causeBySlug.get(d.trueCause);
     const secondPool = Object.keys(scenario.families[d.familySlug].causeRates).filter((s) => s !== d.trueCause);
     const second = !advisedOnly && rng.chance(scenario.secondCauseRate) ? rng.pick(secondPool) : null;
     const confirmed = [d.trueCause, ...(second ? [second] : [])];
+    const fitted = advisedOnly ? [] : returns.fit(d.trueCause);
     const closedAt = new Date(triagedAt.getTime() + rng.int(2, 18) * DAY + rng.int(0, 8) * 3_600_000);
     const candidatesForPlan = last.causes.filter((c) => c.probability >= 0.05).slice(0, 6);
     const plan = candidatesForPlan.length
@@ -221,13 +219,15 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
         causes: confirmed.map((slug, i) => ({ slug, primary: i === 0 })),
         parts: confirmed.flatMap((slug) => causeBySlug.get(slug)?.parts.map((p) => ({ slug: p.part, quantity: p.quantity })) ?? []),
         labourMinutes: Math.round(cause.labourMinutes * (0.8 + rng.next() * 0.5)),
-        upgrades: UPGRADES[cause.area] ?? "",
+        upgrades: upgradesText(fitted),
+        upgradeKinds: fitted,
         notes: `Confirmed on the bench: ${cause.name.toLowerCase()}.`,
       },
-      repeatOf: repeat ? repeat.index : null,
+      repeatOf: repeat ? repeat.index : backWithin90,
       notes: advisedOnly ? "Talked the caller through it; no need to send the unit." : "",
     });
     if (!advisedOnly) {
+      returns.schedule({ index: out.length - 1, closedAt, serial, familySlug: d.familySlug, ridingUse: d.ridingUse, causeSlug: d.trueCause, upgrades: fitted });
       const counts = history.get(d.familySlug) ?? {};
       for (const slug of confirmed) counts[slug] = (counts[slug] ?? 0) + 1;
       history.set(d.familySlug, counts);

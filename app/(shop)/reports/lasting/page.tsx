@@ -1,0 +1,49 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { ComparisonCard } from "@/components/survival/comparison-card";
+import { SurvivalFilterBar } from "@/components/survival/survival-filter";
+import { WarrantyTable } from "@/components/survival/warranty-table";
+import { Panel } from "@/components/ui/panel";
+import { requireRole } from "@/lib/auth/require-role";
+import { familyOptions } from "@/lib/reports/scope";
+import { parseSurvivalFilter } from "@/lib/survival/filter";
+import { loadSurvivalReport } from "@/lib/survival/report";
+
+export const metadata: Metadata = { title: "Does it last?" };
+
+const dayLabel = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+
+export default async function LastingPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  await requireRole("reports:read", "/reports/lasting");
+  const filter = parseSurvivalFilter(await searchParams);
+  const [report, families] = await Promise.all([loadSurvivalReport(filter), familyOptions()]);
+  const months = Math.max(12, report.filter.months);
+
+  return (
+    <div className="flex flex-col gap-6" data-testid="lasting-page">
+      <div>
+        <p className="text-sm"><Link href="/reports">Shop reports</Link></p>
+        <h1>Does the repair last?</h1>
+        <p className="text-ink-soft" data-testid="lasting-scope">
+          Repairs closed from {dayLabel.format(report.from)} to today, {report.familyName ?? "all motor families"}, {report.filter.ridingUse ? `${report.filter.ridingUse} riding` : "all riding uses"}.
+        </p>
+      </div>
+      <SurvivalFilterBar filter={report.filter} families={families} />
+      <Panel title="How this is counted">
+        <p className="text-sm text-ink-soft">
+          Each closed repair with a serial is followed from the day it was closed. It ends when the same unit (same motor family and serial)
+          next comes in: if the bench confirms a fault of the same kind as the one repaired (clutch; seal and bearing; gearing, belt and housing;
+          electrics and sensor), that is a return; a visit for an unrelated fault, or one not yet diagnosed, ends the follow-up without counting
+          against the repair. Units not back are counted up to today. Curves are Kaplan–Meier estimates with 95 % bands; the p-value is the
+          log-rank test. A difference here is what this shop has seen, not proof of cause: units that get an upgrade may also be ridden differently.
+        </p>
+      </Panel>
+      <Panel title={`Back within the ${report.warrantyMonths}-month warranty`}>
+        <WarrantyTable rows={report.warranty} months={report.warrantyMonths} />
+      </Panel>
+      <div className="grid gap-6 xl:grid-cols-2">
+        {report.comparisons.map((c) => <ComparisonCard key={c.upgrade.slug} comparison={c} months={months} />)}
+      </div>
+    </div>
+  );
+}

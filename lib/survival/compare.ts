@@ -1,0 +1,129 @@
+import { kaplanMeier, logRank, type KaplanMeierStep, type SurvivalObservation } from "@/lib/diagnosis";
+import type { FollowUpRow } from "./follow-ups";
+import { groupLabel, type CauseGroup } from "./groups";
+import { UPGRADES, type Upgrade } from "./upgrades";
+
+export const DAYS_PER_MONTH = 30.44;
+export const CHECKPOINT_MONTHS = [3, 6, 12] as const;
+export const AT_RISK_MONTHS = [0, 3, 6, 9, 12, 18, 24] as const;
+/** Below these the page says the data cannot tell yet, rather than printing a verdict. */
+export const MIN_REPAIRS_PER_ARM = 20;
+export const MIN_RETURNS = 5;
+/** A survival figure at a checkpoint needs this many units still followed there. */
+export const MIN_AT_RISK = 10;
+export const ALPHA = 0.05;
+
+export interface Checkpoint {
+  months: number;
+  atRisk: number;
+  /** Share still not back for this group's faults; null when fewer than MIN_AT_RISK are still followed. */
+  survival: number | null;
+  lower: number | null;
+  upper: number | null;
+}
+
+export interface Arm {
+  n: number;
+  returns: number;
+  steps: KaplanMeierStep[];
+  checkpoints: Checkpoint[];
+  atRisk: { months: number; n: number }[];
+  /** The longest follow-up, in days: the curve is drawn up to here. */
+  followedDays: number;
+}
+
+export type Verdict =
+  | { kind: "too_few"; text: string }
+  | { kind: "better" | "worse" | "no_difference"; text: string; months: number };
+
+export interface UpgradeComparison {
+  upgrade: Upgrade;
+  group: CauseGroup;
+  fitted: Arm;
+  notFitted: Arm;
+  pValue: number | null;
+  verdict: Verdict;
+}
+
+export function observationsOf(rows: FollowUpRow[]): SurvivalObservation[] {
+  const out: SurvivalObservation[] = [];
+  for (const r of rows) for (let i = 0; i < r.n; i++) out.push({ time: r.days, event: r.event });
+  return out;
+}
+
+/** S(t) of a step function: the last step at or before t, 1 before the first. */
+export function survivalAt(steps: KaplanMeierStep[], days: number): { survival: number; lower: number; upper: number } {
+  let at = { survival: 1, lower: 1, upper: 1 };
+  for (const s of steps) {
+    if (s.time > days) break;
+    at = s;
+  }
+  return at;
+}
+
+export function arm(rows: FollowUpRow[]): Arm {
+  const obs = observationsOf(rows);
+  const steps = kaplanMeier(obs);
+  const followedAt = (months: number) => obs.filter((o) => o.time >= months * DAYS_PER_MONTH).length;
+  return {
+    n: obs.length,
+    returns: obs.filter((o) => o.event).length,
+    steps,
+    checkpoints: CHECKPOINT_MONTHS.map((months) => {
+      const atRisk = followedAt(months);
+      if (atRisk < MIN_AT_RISK) return { months, atRisk, survival: null, lower: null, upper: null };
+      const s = survivalAt(steps, months * DAYS_PER_MONTH);
+      return { months, atRisk, survival: s.survival, lower: s.lower, upper: s.upper };
+    }),
+    atRisk: AT_RISK_MONTHS.map((months) => ({ months, n: followedAt(months) })),
+    followedDays: obs.reduce((m, o) => Math.max(m, o.time), 0),
+  };
+}
+
+const pct = (s: number) => `${Math.round((1 - s) * 100)} %`;
+export const formatP = (p: number) => (p < 0.001 ? "p < 0.001" : `p = ${p.toFixed(p < 0.01 ? 3 : 2)}`);
+
+/** What the record supports, in words; says "too early" rather than guess. */
+export function verdictFor(upgrade: Upgrade, fitted: Arm, notFitted: Arm, pValue: number | null): Verdict {
+  const group = groupLabel(upgrade.guards);
+  const counts = `n = ${fitted.n} with, ${notFitted.n} without`;
+  const returns = fitted.returns + notFitted.returns;
+  if (fitted.n < MIN_REPAIRS_PER_ARM || notFitted.n < MIN_REPAIRS_PER_ARM || returns < MIN_RETURNS || pValue === null) {
+    return {
+      kind: "too_few",
+      text: `Too early to tell: ${counts}, ${returns} back for ${group} faults so far. The shop needs at least ${MIN_REPAIRS_PER_ARM} repairs each way and ${MIN_RETURNS} returns before comparing.`,
+    };
+  }
+  // The latest checkpoint where both arms still have enough units followed.
+  const months = [...CHECKPOINT_MONTHS].reverse().find((m) => {
+    const a = fitted.checkpoints.find((c) => c.months === m)!;
+    const b = notFitted.checkpoints.find((c) => c.months === m)!;
+    return a.survival !== null && b.survival !== null;
+  });
+  if (months === undefined) {
+    return { kind: "too_few", text: `Too early to tell: fewer than ${MIN_AT_RISK} units each way have been followed for 3 months yet (${counts}).` };
+  }
+  const a = fitted.checkpoints.find((c) => c.months === months)!.survival!;
+  const b = notFitted.checkpoints.find((c) => c.months === months)!.survival!;
+  const figures = `${pct(a)} with vs ${pct(b)} without by ${months} months (${formatP(pValue)}; ${counts})`;
+  if (pValue >= ALPHA) {
+    return { kind: "no_difference", months, text: `No difference shown: units with ${upgrade.phrase} came back for ${group} faults at ${figures}. The record does not show that it helps.` };
+  }
+  const kind = a > b ? "better" : "worse";
+  return { kind, months, text: `Units with ${upgrade.phrase} came back for ${group} faults ${kind === "better" ? "less" : "more"} often: ${figures}.` };
+}
+
+/** Fitted vs not fitted, for every upgrade, among the repairs of the cause group it guards. */
+export function compareUpgrades(rows: FollowUpRow[]): UpgradeComparison[] {
+  return UPGRADES.map((upgrade) => {
+    const inGroup = rows.filter((r) => r.group === upgrade.guards);
+    const withIt = inGroup.filter((r) => r.upgrades.includes(upgrade.slug));
+    const without = inGroup.filter((r) => !r.upgrades.includes(upgrade.slug));
+    const fitted = arm(withIt);
+    const notFitted = arm(without);
+    const pValue = fitted.n > 0 && notFitted.n > 0 && fitted.returns + notFitted.returns > 0
+      ? logRank(observationsOf(withIt), observationsOf(without)).pValue
+      : null;
+    return { upgrade, group: upgrade.guards, fitted, notFitted, pValue, verdict: verdictFor(upgrade, fitted, notFitted, pValue) };
+  });
+}

@@ -1,0 +1,90 @@
+import "server-only";
+import { sql as pg } from "@/db";
+import { RIDING_USES } from "@/db/schema";
+import { CAUSE_GROUPS, type CauseGroup } from "./groups";
+
+export type RidingUse = (typeof RIDING_USES)[number];
+
+/** Which repairs are followed: closed in [from, to), optionally of one motor family and riding use. */
+export interface FollowUpScope {
+  from: Date;
+  to: Date;
+  familyId: number | null;
+  ridingUse: RidingUse | null;
+  /** Follow-up of units not back ends here (normally now). */
+  asOf: Date;
+}
+
+/** Repairs with the same group, upgrades, follow-up length and outcome, counted together. */
+export interface FollowUpRow {
+  group: CauseGroup;
+  /** Upgrade slugs fitted at the repair, sorted. */
+  upgrades: string[];
+  days: number;
+  event: boolean;
+  n: number;
+}
+
+/** The cause group of a causes.area column, in SQL (the areas are our own fixed list, so inlining them is safe). */
+function groupOf(column: string) {
+  const whens = CAUSE_GROUPS.map((g) => `when ${column} in (${g.areas.map((a) => `'${a}'`).join(", ")}) then '${g.slug}'`);
+  return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
+}
+
+/**
+ * How long each repair in scope lasted, in whole days from its closing:
+ * - a repair is a closed case with a serial and a primary confirmed cause from the catalogue;
+ * - its follow-up ends at the unit's next visit: the next case of the same motor family and serial,
+ *   by opening time. That visit is an event when its bench outcome confirms any cause in the same
+ *   cause group as the repair's primary cause; a visit for an unrelated fault, or one with no cause
+ *   confirmed yet, ends the follow-up censored at the visit;
+ * - a unit not back is censored at `asOf`. A visit opened before the repair was closed (a second
+ *   booking for a unit still on the bench) is not a return: censored at day 0.
+ * Reopening a case moves its closing (the follow-up starts at the last closing); a serial back
+ * twice gives two follow-ups, each ended by the visit after it. Counted in Postgres, grouped.
+ */
+export function followUpQuery(scope: FollowUpScope) {
+  const family = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
+  const use = scope.ridingUse === null ? pg`` : pg`and r.riding_use = ${scope.ridingUse}`;
+  const visitFamily = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
+  return pg<{ group: CauseGroup; upgrades: string[]; days: number; event: boolean; n: number }[]>`
+    with visits as (
+      select c.id, c.status, c.closed_at, c.riding_use,
+             lead(c.id) over w as next_id, lead(c.created_at) over w as next_at
+      from cases c
+      where c.serial <> '' ${visitFamily}
+      window w as (partition by c.family_id, c.serial order by c.created_at, c.id)
+    ),
+    repairs as materialized (
+      select r.id, r.closed_at, r.next_id, r.next_at, ${groupOf("ca.area")} as grp
+      from visits r
+      join outcome_causes oc on oc.case_id = r.id and oc.is_primary
+      join causes ca on ca.id = oc.cause_id
+      where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
+        and r.closed_at < ${scope.to.toISOString()}::timestamptz ${use}
+    ),
+    related as (
+      select distinct r.id
+      from repairs r
+      join outcome_causes x on x.case_id = r.next_id
+      join causes y on y.id = x.cause_id
+      where r.next_at > r.closed_at and ${groupOf("y.area")} = r.grp
+    ),
+    fitted as (
+      select u.case_id, array_agg(u.upgrade order by u.upgrade) as kinds
+      from outcome_upgrades u join repairs r on r.id = u.case_id
+      group by u.case_id
+    )
+    select r.grp as "group", coalesce(f.kinds, '{}') as upgrades,
+           floor(extract(epoch from case when r.next_id is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
+                                         else greatest(r.next_at - r.closed_at, interval '0') end) / 86400)::int as days,
+           rel.id is not null as event, count(*)::int as n
+    from repairs r
+    left join related rel on rel.id = r.id
+    left join fitted f on f.case_id = r.id
+    group by 1, 2, 3, 4`;
+}
+
+export async function followUps(scope: FollowUpScope): Promise<FollowUpRow[]> {
+  return followUpQuery(scope);
+}
