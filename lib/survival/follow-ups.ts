@@ -44,7 +44,6 @@ function groupOf(column: string) {
  * twice gives two follow-ups, each ended by the visit after it. Counted in Postgres, grouped.
  */
 export function followUpQuery(scope: FollowUpScope) {
-  const family = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
   const use = scope.ridingUse === null ? pg`` : pg`and r.riding_use = ${scope.ridingUse}`;
   const visitFamily = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
   return pg<{ group: CauseGroup; upgrades: string[]; days: number; event: boolean; n: number }[]>`
