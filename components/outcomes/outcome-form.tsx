@@ -4,6 +4,7 @@ import { FormMessage } from "@/components/ui/form-message";
 import type { ActionState } from "@/lib/actions/define";
 import type { OutcomeSaved } from "@/lib/outcomes/actions";
 import { OUTCOME_LIMITS } from "@/lib/outcomes/input";
+import { UPGRADES } from "@/lib/survival/upgrades";
 import { CauseRows, type CauseRow } from "./cause-rows";
 import { FieldError } from "./field-error";
 import { PartRows, type PartRow } from "./part-rows";
@@ -32,6 +33,7 @@ export function OutcomeForm({ caseId, initial, causes, parts, ranked, action, ph
   const [partRows, setPartRows] = useState<PartRow[]>(() =>
     initial.parts.length ? initial.parts.map((p, i) => ({ key: i + 1, partId: String(p.id), quantity: String(p.quantity) })) : [{ key: 1, partId: "", quantity: "1" }]);
   const [upgrades, setUpgrades] = useState(initial.upgrades);
+  const [upgradeKinds, setUpgradeKinds] = useState<string[]>(initial.upgradeKinds);
   const [labour, setLabour] = useState(initial.labourMinutes ? String(initial.labourMinutes) : "");
   const [notes, setNotes] = useState(initial.notes);
   const errors = state && !state.ok ? state.fieldErrors ?? {} : {};
@@ -81,9 +83,24 @@ export function OutcomeForm({ caseId, initial, causes, parts, ranked, action, ph
         <FieldError id="parts-error" message={errors.partId} />
       </fieldset>
 
+      <fieldset className="flex flex-col gap-1">
+        <legend className="mb-1 font-medium">Upgrades fitted</legend>
+        <p className="text-xs text-ink-faint">Ticked upgrades are followed over time on the &ldquo;Does it last?&rdquo; report.</p>
+        <div className="grid gap-1 sm:grid-cols-2">
+          {UPGRADES.map((u) => (
+            <label key={u.slug} className="flex items-center gap-2 text-sm">
+              <input type="checkbox" name="upgradeKind" value={u.slug} checked={upgradeKinds.includes(u.slug)}
+                onChange={(e) => setUpgradeKinds((k) => (e.target.checked ? [...k, u.slug] : k.filter((x) => x !== u.slug)))} />
+              {u.name}
+            </label>
+          ))}
+        </div>
+        <FieldError id="upgrade-kind-error" message={errors.upgradeKind} />
+      </fieldset>
+
       <div className="grid gap-4 md:grid-cols-[1fr_10rem]">
         <div className="flex flex-col gap-1">
-          <label htmlFor="upgrades" className="text-sm font-medium text-ink-soft">Upgrades fitted</label>
+          <label htmlFor="upgrades" className="text-sm font-medium text-ink-soft">Other upgrades or details (optional)</label>
           <input id="upgrades" name="upgrades" value={upgrades} maxLength={OUTCOME_LIMITS.upgrades} onChange={(e) => setUpgrades(e.target.value)}
             aria-invalid={errors.upgrades ? true : undefined} className={inputClass(errors.upgrades)} />
           <FieldError id="upgrades-error" message={errors.upgrades} />

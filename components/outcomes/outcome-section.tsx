@@ -46,6 +46,7 @@ export async function OutcomeSection({ caseId, user }: { caseId: number; user: S
           otherCause: view.outcome?.otherCause ?? "",
           parts: view.parts.map((p) => ({ id: p.id, quantity: p.quantity })),
           upgrades: view.outcome?.upgrades ?? "",
+          upgradeKinds: view.upgradeKinds,
           labourMinutes: view.outcome?.labourMinutes ?? 0,
           notes: view.outcome?.notes ?? "",
         }}

@@ -1,4 +1,5 @@
 import type { OutcomeView } from "@/lib/outcomes/queries";
+import { upgradeNamed } from "@/lib/survival/upgrades";
 import { PhotoStrip } from "./photo-strip";
 
 const when = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ");
@@ -25,7 +26,9 @@ export function OutcomeSummary({ view }: { view: OutcomeView }) {
         <ul>{view.parts.map((p) => <li key={p.id}>{p.quantity} × {p.name} <span className="font-mono text-xs text-ink-faint">{p.sku}</span></li>)}</ul>
       )}</dd>
       <dt className="font-medium text-ink-soft">Upgrades fitted</dt>
-      <dd>{o?.upgrades || "None"}</dd>
+      <dd>{view.upgradeKinds.length === 0 && !o?.upgrades ? "None" : (
+        <>{view.upgradeKinds.map((k) => upgradeNamed(k)?.name ?? k).join("; ")}{view.upgradeKinds.length && o?.upgrades ? " · " : ""}{o?.upgrades}</>
+      )}</dd>
       <dt className="font-medium text-ink-soft">Labour</dt>
       <dd>{o ? `${o.labourMinutes} min` : "—"}</dd>
       <dt className="font-medium text-ink-soft">Notes</dt>

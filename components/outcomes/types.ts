@@ -19,6 +19,7 @@ export interface OutcomeDraft {
   otherCause: string;
   parts: { id: number; quantity: number }[];
   upgrades: string;
+  upgradeKinds: string[];
   labourMinutes: number;
   notes: string;
 }

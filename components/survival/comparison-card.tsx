@@ -23,7 +23,7 @@ export function ComparisonCard({ comparison, months }: { comparison: UpgradeComp
     <Panel title={upgrade.name} className="flex flex-col gap-3">
       <div data-testid="comparison" data-upgrade={upgrade.slug} data-verdict={verdict.kind} className="flex flex-col gap-3">
         <p className="text-sm text-ink-soft">
-          Repairs of a {groupLabel(comparison.group)} fault; the curve is the share not back for a {groupLabel(comparison.group)} fault.
+          Repairs of {groupLabel(comparison.group)} faults; the curve is the share not back for a fault of that kind.
           {pValue !== null ? <> Log-rank test: <strong data-testid="p-value">{formatP(pValue)}</strong>.</> : null}
         </p>
         <p role="note" data-testid="verdict" className={`rounded-md p-2 text-sm ${VERDICT_STYLE[verdict.kind]}`}>{verdict.text}</p>

@@ -27,7 +27,7 @@ export function SurvivalChart({ curves, months, label }: { curves: Curve[]; mont
           <CartesianGrid stroke={GRID} />
           <XAxis type="number" dataKey="t" domain={[0, months]} ticks={[0, 3, 6, 9, 12, 18, 24, 30, 36].filter((m) => m <= months)}
             tick={{ fontSize: 11, fill: INK }} unit=" mo" allowDuplicatedCategory={false} />
-          <YAxis domain={[0, 1]} tickFormatter={percent} tick={{ fontSize: 11, fill: INK_FAINT }} width={44} />
+          <YAxis domain={[0, 1]} tickFormatter={percent} tick={{ fontSize: 11, fill: INK_FAINT }} width={52} />
           <Tooltip formatter={(v) => (Array.isArray(v) ? v.map((x) => percent(Number(x))).join("–") : percent(Number(v)))}
             labelFormatter={(t) => `${Number(t).toFixed(1)} months`} />
           <Legend wrapperStyle={{ fontSize: 12 }} />

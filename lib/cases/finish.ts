@@ -18,6 +18,7 @@ import { sendInstructions } from "./shipping";
 import { loadShop } from "./shop";
 import { composeSummaryMail } from "./summary-mail";
 import { publishedTree } from "./tree-cache";
+import { upgradeAdviceFor } from "@/lib/survival/advice-query";
 import { reachedCautions } from "./walk-view";
 
 export interface FinishedCase {
@@ -61,6 +62,8 @@ export async function finishCase(input: FinishInput, userId: string): Promise<Fi
     const quote = booked ? roughQuote(ranking, catalogue) : null;
     const plan = booked ? benchPlanFor(ranking, catalogue) : null;
     const toSend = input.outcome === "booked_in" ? sendInstructions(input.send) : "";
+    const familyName = family ? `${family.name} ${family.generation}`.trim() : "drive unit";
+    const upgradeAdvice = booked && row.email ? await upgradeAdviceFor({ id: row.familyId, name: familyName }, row.ridingUse) : null;
     const now = new Date();
 
     await tx.update(cases).set({
@@ -81,11 +84,12 @@ export async function finishCase(input: FinishInput, userId: string): Promise<Fi
     if (row.email) {
       const mail = composeSummaryMail({
         shop, reference: row.reference, callerName: row.callerName,
-        familyName: family ? `${family.name} ${family.generation}`.trim() : "drive unit",
+        familyName,
         symptom: row.symptom, outcome: input.outcome,
         likely: ranking.causes.filter((c) => c.probability >= LIKELY_MIN).slice(0, LIKELY_IN_MAIL)
           .map((c) => ({ name: catalogue.get(c.causeId)?.name ?? c.causeId, probability: c.probability })),
         unlisted: ranking.unlisted, quote, sendInstructions: toSend, advice: input.advice, stopRiding: advice.stopRiding,
+        upgradeAdvice: upgradeAdvice?.items.flatMap((a) => (a.callerText ? [a.callerText] : [])) ?? [],
       });
       await enqueueMail(tx, { to: row.email, subject: mail.subject, text: mail.text, html: mail.html, caseId: row.id });
       await tx.insert(caseEvents).values({ caseId: row.id, kind: "mail_queued", byUserId: userId, note: `Summary to ${row.email}` });

@@ -13,6 +13,8 @@ export interface SummaryMailInput {
   sendInstructions: string;
   advice: string;
   stopRiding: boolean;
+  /** What the shop's own record supports about upgrades for this family and use, in plain words. */
+  upgradeAdvice?: string[];
 }
 
 export interface ComposedMail {
@@ -55,6 +57,7 @@ export function composeSummaryMail(m: SummaryMailInput): ComposedMail {
         "We call you with a firm price before any work beyond the inspection.",
       ] });
     }
+    if (m.upgradeAdvice?.length) sections.push({ heading: "Upgrades that have helped units like yours", lines: m.upgradeAdvice });
     sections.push({ heading: "How to send the unit", lines: [m.sendInstructions, `Please put a note with ${m.reference} and your phone number inside.`] });
   }
   if (m.advice) sections.push({ heading: m.outcome === "advised" ? "Our advice" : "Notes", lines: [m.advice] });

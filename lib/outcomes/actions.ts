@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
-import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, parts, uploads } from "@/db/schema";
+import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrades, parts, uploads } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { caseOnlyInput, outcomeFormInput, OTHER_PRIMARY, reopenInput } from "./input";
@@ -50,6 +50,8 @@ export const saveOutcomeAction = defineAction({
           caseId: c.id, causeId, primary: input.primary !== OTHER_PRIMARY && input.primary === causeId,
         })));
       }
+      await tx.delete(outcomeUpgrades).where(eq(outcomeUpgrades.caseId, c.id));
+      if (input.upgradeKinds.length) await tx.insert(outcomeUpgrades).values(input.upgradeKinds.map((upgrade) => ({ caseId: c.id, upgrade })));
       await tx.delete(outcomeParts).where(eq(outcomeParts.caseId, c.id));
       if (input.parts.length) await tx.insert(outcomeParts).values(input.parts.map((p) => ({ caseId: c.id, ...p })));
       if (input.detachPhotoIds.length) {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { UPGRADE_KINDS, type UpgradeKind } from "@/db/schema";
 
 /** Limits of a bench outcome, shared by the form and the server. */
 export const OUTCOME_LIMITS = {
@@ -30,6 +31,7 @@ export const outcomeFormInput = z
     partId: list,
     partQty: list,
     upgrades: raw,
+    upgradeKind: list,
     labourMinutes: raw,
     notes: raw,
     detachPhotoId: list,
@@ -43,6 +45,11 @@ export const outcomeFormInput = z
     };
     const otherCause = text("otherCause", OUTCOME_LIMITS.otherCause, "description of the other cause");
     const upgrades = text("upgrades", OUTCOME_LIMITS.upgrades, "upgrades");
+    const upgradeKinds: UpgradeKind[] = [];
+    for (const v of raw.upgradeKind) {
+      if (!(UPGRADE_KINDS as readonly string[]).includes(v)) issue(["upgradeKind"], "Pick upgrades from the list.");
+      else if (!upgradeKinds.includes(v as UpgradeKind)) upgradeKinds.push(v as UpgradeKind);
+    }
     const notes = text("notes", OUTCOME_LIMITS.notes, "notes");
     const labourText = raw.labourMinutes.trim();
     const labourMinutes = labourText === "" ? 0 : Number(labourText);
@@ -107,6 +114,7 @@ export const outcomeFormInput = z
       otherCause,
       parts,
       upgrades,
+      upgradeKinds,
       labourMinutes,
       notes,
       detachPhotoIds: raw.detachPhotoId.filter((id) => /^[a-f0-9]{32}$/.test(id)),

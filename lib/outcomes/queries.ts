@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { caseEvents, caseOutcomes, cases, causes, outcomeCauses, outcomeParts, parts, uploads, users, type CaseStatus } from "@/db/schema";
+import { caseEvents, caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrades, parts, uploads, users, type CaseStatus, type UpgradeKind } from "@/db/schema";
 import { repeatLinksOf, type RepeatLink } from "./repeat";
 
 export interface OutcomeView {
@@ -20,6 +20,8 @@ export interface OutcomeView {
   } | null;
   causes: { id: number; slug: string; name: string; primary: boolean }[];
   parts: { id: number; slug: string; name: string; sku: string; quantity: number }[];
+  /** Upgrades from the shop's list, followed on the "Does it last?" page. */
+  upgradeKinds: UpgradeKind[];
   photos: { id: string; originalName: string; width: number | null; height: number | null }[];
   repeats: RepeatLink[];
   reopenings: { at: Date; by: string | null; note: string }[];
@@ -36,7 +38,7 @@ export async function loadOutcomeView(caseId: number): Promise<OutcomeView | nul
     .select({ id: cases.id, reference: cases.reference, status: cases.status, serial: cases.serial, finalRanking: cases.finalRanking })
     .from(cases).where(eq(cases.id, caseId)).limit(1);
   if (!c) return null;
-  const [outcomeRows, causeRows, partRows, photoRows, repeats, reopenRows] = await Promise.all([
+  const [outcomeRows, causeRows, partRows, upgradeRows, photoRows, repeats, reopenRows] = await Promise.all([
     db.select({
       otherCause: caseOutcomes.otherCause, upgrades: caseOutcomes.upgrades, labourMinutes: caseOutcomes.labourMinutes,
       notes: caseOutcomes.notes, recordedAt: caseOutcomes.recordedAt, recordedBy: users.name,
@@ -47,6 +49,7 @@ export async function loadOutcomeView(caseId: number): Promise<OutcomeView | nul
     db.select({ id: parts.id, slug: parts.slug, name: parts.name, sku: parts.sku, quantity: outcomeParts.quantity })
       .from(outcomeParts).innerJoin(parts, eq(parts.id, outcomeParts.partId))
       .where(eq(outcomeParts.caseId, caseId)).orderBy(asc(parts.name)),
+    db.select({ upgrade: outcomeUpgrades.upgrade }).from(outcomeUpgrades).where(eq(outcomeUpgrades.caseId, caseId)).orderBy(asc(outcomeUpgrades.upgrade)),
     db.select({ id: uploads.id, originalName: uploads.originalName, width: uploads.width, height: uploads.height })
       .from(uploads).where(eq(uploads.caseId, caseId)).orderBy(asc(uploads.createdAt)),
     repeatLinksOf(caseId),
@@ -56,7 +59,7 @@ export async function loadOutcomeView(caseId: number): Promise<OutcomeView | nul
   ]);
   return {
     caseId: c.id, reference: c.reference, status: c.status, serial: c.serial, finalRanking: c.finalRanking,
-    outcome: outcomeRows[0] ?? null, causes: causeRows, parts: partRows, photos: photoRows, repeats, reopenings: reopenRows,
+    outcome: outcomeRows[0] ?? null, causes: causeRows, parts: partRows, upgradeKinds: upgradeRows.map((u) => u.upgrade), photos: photoRows, repeats, reopenings: reopenRows,
   };
 }
 

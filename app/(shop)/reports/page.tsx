@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { AccuracySection } from "@/components/reports/accuracy-section";
 import { ParetoSection } from "@/components/reports/pareto-section";
 import { PartsSection } from "@/components/reports/parts-section";
@@ -31,6 +32,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         <p className="text-ink-soft" data-testid="report-scope">
           Closed cases from {dayLabel.format(from)} to {dayLabel.format(new Date(to.getTime() - 1))}, {report.scope.familyName ?? "all motor families"}.
         </p>
+        <p className="text-sm"><Link href="/reports/lasting">Does the repair last? Return-free time after repairs, by upgrade</Link></p>
       </div>
       <ReportFilterBar
         filter={filter}

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { OutcomeSection } from "@/components/outcomes/outcome-section";
 import { CaseMail } from "@/components/cases/case-mail";
+import { CaseFollowUp } from "@/components/survival/case-follow-up";
 import { EventList } from "@/components/cases/event-list";
 import { StatusBadge, STATUS_LABEL } from "@/components/cases/status-badge";
 import { StepList } from "@/components/cases/step-list";
@@ -60,6 +61,8 @@ export default async function CasePage({ params, searchParams }: { params: Promi
           <dt className="text-ink-faint">Triage finished</dt><dd>{kase.triagedAt ? `${kase.triagedAt.toISOString().slice(0, 16).replace("T", " ")} UTC` : "—"}</dd>
         </dl>
       </Panel>
+
+      <CaseFollowUp kase={kase} />
 
       {kase.triagedAt ? <Panel title="Triage result"><TriageSummary kase={kase} nameOf={nameOf} /></Panel> : null}
 
