@@ -37,3 +37,4 @@ export { learnLikelihoods } from "./learn";
 export { wilsonInterval, rankingScores, topKAccuracy, Z_95 } from "./statistics";
 export { walkPath } from "./path";
 export { kaplanMeier, logRank, type SurvivalObservation, type KaplanMeierStep } from "./survival";
+export { kaplanMeierOfTally, logRankOfTally, tallyObservations, type SurvivalTally } from "./survival";

@@ -40,16 +40,38 @@ function checked(observations: SurvivalObservation[], what: string): SurvivalObs
   return observations;
 }
 
-/** Distinct times ascending, with the events and censorings at each. */
-function tally(observations: SurvivalObservation[]): { time: number; events: number; censored: number }[] {
-  const byTime = new Map<number, { time: number; events: number; censored: number }>();
-  for (const o of observations) {
-    const row = byTime.get(o.time) ?? { time: o.time, events: 0, censored: 0 };
-    if (o.event) row.events++;
-    else row.censored++;
-    byTime.set(o.time, row);
+/** Observations counted by time: how many had the event and how many were censored at `time`. */
+export interface SurvivalTally {
+  time: number;
+  events: number;
+  censored: number;
+}
+
+/** Distinct times ascending, with the events and censorings at each (rows of the same time are added up). */
+export function tallyObservations(observations: SurvivalObservation[]): SurvivalTally[] {
+  return merged(observations.map((o) => ({ time: o.time, events: o.event ? 1 : 0, censored: o.event ? 0 : 1 })));
+}
+
+function merged(rows: SurvivalTally[]): SurvivalTally[] {
+  const byTime = new Map<number, SurvivalTally>();
+  for (const r of rows) {
+    const row = byTime.get(r.time) ?? { time: r.time, events: 0, censored: 0 };
+    row.events += r.events;
+    row.censored += r.censored;
+    byTime.set(r.time, row);
   }
   return [...byTime.values()].sort((a, b) => a.time - b.time);
+}
+
+function checkedTally(rows: SurvivalTally[], what: string): SurvivalTally[] {
+  if (!Array.isArray(rows)) throw new DiagnosisError("empty_input", `${what} must be a list of counts`);
+  rows.forEach((r, i) => {
+    requireNonNegative(r?.time, `${what}[${i}].time`);
+    for (const k of ["events", "censored"] as const) {
+      if (!Number.isInteger(r[k]) || r[k] < 0) throw new DiagnosisError("bad_count", `${what}[${i}].${k} must be a whole number ≥ 0`);
+    }
+  });
+  return merged(rows);
 }
 
 /**
@@ -58,9 +80,14 @@ function tally(observations: SurvivalObservation[]): { time: number; events: num
  * stays inside [0, 1]; once S reaches 0 the interval is [0, 0].
  */
 export function kaplanMeier(observations: SurvivalObservation[]): KaplanMeierStep[] {
-  const rows = tally(checked(observations, "observations"));
+  return kaplanMeierOfTally(tallyObservations(checked(observations, "observations")));
+}
+
+/** kaplanMeier over observations already counted by time (the same computation, for large groups). */
+export function kaplanMeierOfTally(counts: SurvivalTally[]): KaplanMeierStep[] {
+  const rows = checkedTally(counts, "counts");
   const steps: KaplanMeierStep[] = [];
-  let atRisk = observations.length;
+  let atRisk = rows.reduce((n, r) => n + r.events + r.censored, 0);
   let survival = 1;
   let greenwood = 0;
   for (const row of rows) {
@@ -90,11 +117,17 @@ function logLogInterval(survival: number, greenwood: number): { lower: number; u
  * one degree of freedom. With no events, or no variance, there is nothing to test: chiSquare 0, p 1.
  */
 export function logRank(a: SurvivalObservation[], b: SurvivalObservation[]): LogRankResult {
-  const rowsA = tally(checked(a, "a"));
-  const rowsB = tally(checked(b, "b"));
+  return logRankOfTally(tallyObservations(checked(a, "a")), tallyObservations(checked(b, "b")));
+}
+
+/** logRank over observations already counted by time (the same computation, for large groups). */
+export function logRankOfTally(countsA: SurvivalTally[], countsB: SurvivalTally[]): LogRankResult {
+  const rowsA = checkedTally(countsA, "a");
+  const rowsB = checkedTally(countsB, "b");
   const times = [...new Set([...rowsA, ...rowsB].filter((r) => r.events > 0).map((r) => r.time))].sort((x, y) => x - y);
-  let nA = a.length;
-  let nB = b.length;
+  const size = (rows: SurvivalTally[]) => rows.reduce((n, r) => n + r.events + r.censored, 0);
+  let nA = size(rowsA);
+  let nB = size(rowsB);
   let iA = 0;
   let iB = 0;
   let observedA = 0;

@@ -1,5 +1,5 @@
-import { kaplanMeier, logRank, type KaplanMeierStep, type SurvivalObservation } from "@/lib/diagnosis";
-import type { FollowUpRow } from "./follow-ups";
+import { kaplanMeierOfTally, logRankOfTally, type KaplanMeierStep, type SurvivalTally } from "@/lib/diagnosis";
+import type { FollowUpCount } from "./follow-ups";
 import { groupLabel, type CauseGroup } from "./groups";
 import { UPGRADES, type Upgrade } from "./upgrades";
 
@@ -45,10 +45,27 @@ export interface UpgradeComparison {
   verdict: Verdict;
 }
 
-export function observationsOf(rows: FollowUpRow[]): SurvivalObservation[] {
-  const out: SurvivalObservation[] = [];
-  for (const r of rows) for (let i = 0; i < r.n; i++) out.push({ time: r.days, event: r.event });
-  return out;
+/** Follow-ups counted by day, as the engine takes them. */
+export function tallyOf(rows: { days: number; event: boolean; n: number }[]): SurvivalTally[] {
+  return rows.map((r) => ({ time: r.days, events: r.event ? r.n : 0, censored: r.event ? 0 : r.n }));
+}
+
+/** `all` minus `part`, day by day: the repairs of a group that did not have an upgrade fitted. */
+export function without(all: SurvivalTally[], part: SurvivalTally[]): SurvivalTally[] {
+  const key = (t: number, e: boolean) => `${t}:${e}`;
+  const left = new Map<string, number>();
+  for (const r of all) {
+    left.set(key(r.time, true), (left.get(key(r.time, true)) ?? 0) + r.events);
+    left.set(key(r.time, false), (left.get(key(r.time, false)) ?? 0) + r.censored);
+  }
+  for (const r of part) {
+    left.set(key(r.time, true), (left.get(key(r.time, true)) ?? 0) - r.events);
+    left.set(key(r.time, false), (left.get(key(r.time, false)) ?? 0) - r.censored);
+  }
+  return [...left].filter(([, n]) => n > 0).map(([k, n]) => {
+    const [time, event] = k.split(":");
+    return { time: Number(time), events: event === "true" ? n : 0, censored: event === "true" ? 0 : n };
+  });
 }
 
 /** S(t) of a step function: the last step at or before t, 1 before the first. */
@@ -61,13 +78,12 @@ export function survivalAt(steps: KaplanMeierStep[], days: number): { survival: 
   return at;
 }
 
-export function arm(rows: FollowUpRow[]): Arm {
-  const obs = observationsOf(rows);
-  const steps = kaplanMeier(obs);
-  const followedAt = (months: number) => obs.filter((o) => o.time >= months * DAYS_PER_MONTH).length;
+export function arm(tally: SurvivalTally[]): Arm {
+  const steps = kaplanMeierOfTally(tally);
+  const followedAt = (months: number) => tally.reduce((n, r) => (r.time >= months * DAYS_PER_MONTH ? n + r.events + r.censored : n), 0);
   return {
-    n: obs.length,
-    returns: obs.filter((o) => o.event).length,
+    n: followedAt(0),
+    returns: tally.reduce((n, r) => n + r.events, 0),
     steps,
     checkpoints: CHECKPOINT_MONTHS.map((months) => {
       const atRisk = followedAt(months);
@@ -76,7 +92,7 @@ export function arm(rows: FollowUpRow[]): Arm {
       return { months, atRisk, survival: s.survival, lower: s.lower, upper: s.upper };
     }),
     atRisk: AT_RISK_MONTHS.map((months) => ({ months, n: followedAt(months) })),
-    followedDays: obs.reduce((m, o) => Math.max(m, o.time), 0),
+    followedDays: tally.reduce((m, r) => Math.max(m, r.time), 0),
   };
 }
 
@@ -114,16 +130,13 @@ export function verdictFor(upgrade: Upgrade, fitted: Arm, notFitted: Arm, pValue
 }
 
 /** Fitted vs not fitted, for every upgrade, among the repairs of the cause group it guards. */
-export function compareUpgrades(rows: FollowUpRow[]): UpgradeComparison[] {
+export function compareUpgrades(rows: FollowUpCount[]): UpgradeComparison[] {
   return UPGRADES.map((upgrade) => {
-    const inGroup = rows.filter((r) => r.group === upgrade.guards);
-    const withIt = inGroup.filter((r) => r.upgrades.includes(upgrade.slug));
-    const without = inGroup.filter((r) => !r.upgrades.includes(upgrade.slug));
+    const withIt = tallyOf(rows.filter((r) => r.kind === "fitted" && r.key === upgrade.slug));
+    const withoutIt = without(tallyOf(rows.filter((r) => r.kind === "group" && r.key === upgrade.guards)), withIt);
     const fitted = arm(withIt);
-    const notFitted = arm(without);
-    const pValue = fitted.n > 0 && notFitted.n > 0 && fitted.returns + notFitted.returns > 0
-      ? logRank(observationsOf(withIt), observationsOf(without)).pValue
-      : null;
+    const notFitted = arm(withoutIt);
+    const pValue = fitted.n > 0 && notFitted.n > 0 && fitted.returns + notFitted.returns > 0 ? logRankOfTally(withIt, withoutIt).pValue : null;
     return { upgrade, group: upgrade.guards, fitted, notFitted, pValue, verdict: verdictFor(upgrade, fitted, notFitted, pValue) };
   });
 }

@@ -1,7 +1,8 @@
 import "server-only";
 import { sql as pg } from "@/db";
 import { RIDING_USES } from "@/db/schema";
-import { CAUSE_GROUPS, type CauseGroup } from "./groups";
+import { CAUSE_GROUPS } from "./groups";
+import { UPGRADES } from "./upgrades";
 
 export type RidingUse = (typeof RIDING_USES)[number];
 
@@ -15,11 +16,13 @@ export interface FollowUpScope {
   asOf: Date;
 }
 
-/** Repairs with the same group, upgrades, follow-up length and outcome, counted together. */
-export interface FollowUpRow {
-  group: CauseGroup;
-  /** Upgrade slugs fitted at the repair, sorted. */
-  upgrades: string[];
+/**
+ * Follow-ups counted together: `key` is a cause group for all repairs of that group, or an upgrade
+ * slug for the repairs of the group it guards that had it fitted.
+ */
+export interface FollowUpCount {
+  kind: "group" | "fitted";
+  key: string;
   days: number;
   event: boolean;
   n: number;
@@ -29,6 +32,11 @@ export interface FollowUpRow {
 function groupOf(column: string) {
   const whens = CAUSE_GROUPS.map((g) => `when ${column} in (${g.areas.map((a) => `'${a}'`).join(", ")}) then '${g.slug}'`);
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
+}
+
+/** The cause group an upgrade guards, in SQL, for an outcome_upgrades.upgrade column. */
+function guardsOf(column: string) {
+  return pg.unsafe(`(case ${UPGRADES.map((u) => `when ${column} = '${u.slug}' then '${u.guards}'`).join(" ")} end)`);
 }
 
 /**
@@ -46,7 +54,7 @@ function groupOf(column: string) {
 export function followUpQuery(scope: FollowUpScope) {
   const use = scope.ridingUse === null ? pg`` : pg`and r.riding_use = ${scope.ridingUse}`;
   const visitFamily = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
-  return pg<{ group: CauseGroup; upgrades: string[]; days: number; event: boolean; n: number }[]>`
+  return pg<FollowUpCount[]>`
     with visits as (
       select c.id, c.status, c.closed_at, c.riding_use,
              lead(c.id) over w as next_id, lead(c.created_at) over w as next_at
@@ -55,35 +63,33 @@ export function followUpQuery(scope: FollowUpScope) {
       window w as (partition by c.family_id, c.serial order by c.created_at, c.id)
     ),
     repairs as materialized (
-      select r.id, r.closed_at, r.next_id, r.next_at, ${groupOf("ca.area")} as grp
+      select r.id, r.next_id, r.next_at > r.closed_at as came_back, ${groupOf("ca.area")} as grp,
+             floor(extract(epoch from case when r.next_id is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
+                                           else greatest(r.next_at - r.closed_at, interval '0') end) / 86400)::int as days
       from visits r
       join outcome_causes oc on oc.case_id = r.id and oc.is_primary
       join causes ca on ca.id = oc.cause_id
       where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
         and r.closed_at < ${scope.to.toISOString()}::timestamptz ${use}
     ),
-    related as (
-      select distinct r.id
-      from repairs r
-      join outcome_causes x on x.case_id = r.next_id
-      join causes y on y.id = x.cause_id
-      where r.next_at > r.closed_at and ${groupOf("y.area")} = r.grp
+    -- The groups confirmed at each unit's next visit, for the repairs whose unit came back.
+    confirmed_next as (
+      select distinct x.case_id, ${groupOf("y.area")} as grp
+      from outcome_causes x join causes y on y.id = x.cause_id
+      where x.case_id in (select next_id from repairs where came_back)
     ),
-    fitted as (
-      select u.case_id, array_agg(u.upgrade order by u.upgrade) as kinds
-      from outcome_upgrades u join repairs r on r.id = u.case_id
-      group by u.case_id
+    ended as (
+      select r.id, r.grp, r.days, cn.case_id is not null as event
+      from repairs r left join confirmed_next cn on cn.case_id = r.next_id and cn.grp = r.grp and r.came_back
     )
-    select r.grp as "group", coalesce(f.kinds, '{}') as upgrades,
-           floor(extract(epoch from case when r.next_id is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
-                                         else greatest(r.next_at - r.closed_at, interval '0') end) / 86400)::int as days,
-           rel.id is not null as event, count(*)::int as n
-    from repairs r
-    left join related rel on rel.id = r.id
-    left join fitted f on f.case_id = r.id
-    group by 1, 2, 3, 4`;
+    select 'group' as kind, grp as key, days, event, count(*)::int as n from ended group by grp, days, event
+    union all
+    select 'fitted', u.upgrade, r.days, r.event, count(*)::int
+    from ended r join outcome_upgrades u on u.case_id = r.id
+    where r.grp = ${guardsOf("u.upgrade")}
+    group by u.upgrade, r.days, r.event`;
 }
 
-export async function followUps(scope: FollowUpScope): Promise<FollowUpRow[]> {
+export async function followUps(scope: FollowUpScope): Promise<FollowUpCount[]> {
   return followUpQuery(scope);
 }

@@ -1,10 +1,10 @@
 import "server-only";
-import { kaplanMeier } from "@/lib/diagnosis";
+import { kaplanMeierOfTally } from "@/lib/diagnosis";
 import { monthsBefore } from "@/lib/reports/period";
 import { sql as pg } from "@/db";
-import { compareUpgrades, DAYS_PER_MONTH, observationsOf, survivalAt, type UpgradeComparison } from "./compare";
+import { compareUpgrades, DAYS_PER_MONTH, survivalAt, tallyOf, type UpgradeComparison } from "./compare";
 import type { SurvivalFilter } from "./filter";
-import { followUps, type FollowUpRow, type FollowUpScope } from "./follow-ups";
+import { followUps, type FollowUpCount, type FollowUpScope } from "./follow-ups";
 import { CAUSE_GROUPS, type CauseGroup } from "./groups";
 import { loadWarrantyMonths } from "./warranty";
 
@@ -41,11 +41,11 @@ export async function followUpScope(filter: SurvivalFilter, asOf = new Date()): 
   };
 }
 
-export function warrantyByGroup(rows: FollowUpRow[], warrantyMonths: number): GroupWarranty[] {
+export function warrantyByGroup(rows: FollowUpCount[], warrantyMonths: number): GroupWarranty[] {
   const limit = warrantyMonths * DAYS_PER_MONTH;
   return CAUSE_GROUPS.map(({ slug }) => {
-    const inGroup = rows.filter((r) => r.group === slug);
-    const steps = kaplanMeier(observationsOf(inGroup));
+    const inGroup = rows.filter((r) => r.kind === "group" && r.key === slug);
+    const steps = kaplanMeierOfTally(tallyOf(inGroup));
     return {
       group: slug,
       repairs: inGroup.reduce((a, r) => a + r.n, 0),

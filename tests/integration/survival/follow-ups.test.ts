@@ -5,11 +5,11 @@ import { cases, outcomeUpgrades, type UpgradeKind } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import { listCases } from "@/lib/cases/list";
 import { caseListQuery } from "@/lib/cases/list-query";
-import { kaplanMeier, logRank } from "@/lib/diagnosis";
+import { kaplanMeierOfTally, logRank } from "@/lib/diagnosis";
 import { reopenCaseAction, saveOutcomeAction, startBenchAction } from "@/lib/outcomes/actions";
 import { upgradeAdviceFor } from "@/lib/survival/advice-query";
-import { compareUpgrades, observationsOf } from "@/lib/survival/compare";
-import { followUps, type FollowUpRow } from "@/lib/survival/follow-ups";
+import { compareUpgrades, tallyOf } from "@/lib/survival/compare";
+import { followUps, type FollowUpCount } from "@/lib/survival/follow-ups";
 import { warrantyReturnOf } from "@/lib/survival/warranty";
 import { createRoleUsers } from "../../support/db";
 import { resetToDemo } from "../../support/seed";
@@ -18,7 +18,7 @@ import { day, demoIds, insertCases, type DemoIds } from "../reports/fixtures";
 const AS_OF = new Date("2026-06-30T00:00:00Z");
 const scope = (familyId: number) => ({ from: new Date("2025-01-01T00:00:00Z"), to: AS_OF, familyId, ridingUse: null, asOf: AS_OF });
 const fit = (caseId: number, upgrade: UpgradeKind) => db.insert(outcomeUpgrades).values({ caseId, upgrade });
-const sorted = (rows: FollowUpRow[]) => [...rows].sort((a, b) => a.group.localeCompare(b.group) || a.days - b.days);
+const sorted = (rows: FollowUpCount[]) => [...rows].sort((a, b) => a.kind.localeCompare(b.kind) || a.key.localeCompare(b.key) || a.days - b.days);
 
 describe("return-free follow-up on a small hand-made history", () => {
   let ids: DemoIds;
@@ -54,15 +54,16 @@ describe("return-free follow-up on a small hand-made history", () => {
     const rows = sorted(await followUps(scope(family)));
     // Hand-computed whole days from closing (noon) to the next visit (noon) or to 30 June 00:00.
     expect(rows).toEqual([
-      { group: "clutch", upgrades: [], days: 0, event: false, n: 1 }, // S6: second booking while on the bench
-      { group: "clutch", upgrades: [], days: 10, event: false, n: 1 }, // S3: back, nothing confirmed yet
-      { group: "clutch", upgrades: [], days: 30, event: false, n: 1 }, // S1's second repair: back for a seal fault
-      { group: "clutch", upgrades: ["uprated-clutch"], days: 60, event: true, n: 1 }, // S1's first repair: clutch again
-      { group: "clutch", upgrades: [], days: 148, event: false, n: 1 }, // S2: not back by 30 June
-      { group: "sealing", upgrades: [], days: 70, event: false, n: 1 }, // S1's third repair: not back
+      { kind: "fitted", key: "uprated-clutch", days: 60, event: true, n: 1 }, // S1's first repair had the uprated clutch
+      { kind: "group", key: "clutch", days: 0, event: false, n: 1 }, // S6: second booking while on the bench
+      { kind: "group", key: "clutch", days: 10, event: false, n: 1 }, // S3: back, nothing confirmed yet
+      { kind: "group", key: "clutch", days: 30, event: false, n: 1 }, // S1's second repair: back for a seal fault
+      { kind: "group", key: "clutch", days: 60, event: true, n: 1 }, // S1's first repair: clutch again
+      { kind: "group", key: "clutch", days: 148, event: false, n: 1 }, // S2: not back by 30 June
+      { kind: "group", key: "sealing", days: 70, event: false, n: 1 }, // S1's third repair: not back
     ]);
     // Kaplan–Meier by hand: one event at 60 days with 2 at risk (60 and 148) → S = 1/2.
-    const steps = kaplanMeier(observationsOf(rows.filter((r) => r.group === "clutch")));
+    const steps = kaplanMeierOfTally(tallyOf(rows.filter((r) => r.kind === "group" && r.key === "clutch")));
     expect(steps).toHaveLength(1);
     expect(steps[0]).toMatchObject({ time: 60, atRisk: 2, events: 1, censored: 1, survival: 0.5 });
   });
@@ -93,11 +94,14 @@ describe("return-free follow-up on a small hand-made history", () => {
     expect((await executeAction(reopenCaseAction, { caseId: String(e), reason: "Clutch re-check after road test" }, users.senior)).ok).toBe(true);
     const now = { ...scope(family), to: new Date(Date.now() + 60_000), asOf: new Date(Date.now() + 60_000) };
     const reopened = await followUps(now);
-    expect(reopened.filter((r) => r.upgrades.includes("uprated-clutch") && r.days === 0)).toEqual([]); // on the bench again: not followed
+    expect(reopened.filter((r) => r.key === "uprated-clutch" && r.days === 0)).toEqual([]); // on the bench again: not followed
     expect((await close()).ok).toBe(true);
     const [row] = await db.select({ closedAt: cases.closedAt }).from(cases).where(eq(cases.id, e));
     const again = await followUps({ ...now, from: new Date(row.closedAt!.getTime() - 1000) });
-    expect(again).toEqual([{ group: "clutch", upgrades: ["uprated-clutch"], days: 0, event: false, n: 1 }]);
+    expect(sorted(again)).toEqual([
+      { kind: "fitted", key: "uprated-clutch", days: 0, event: false, n: 1 },
+      { kind: "group", key: "clutch", days: 0, event: false, n: 1 },
+    ]);
   });
 });
 

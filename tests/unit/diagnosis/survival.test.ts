@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import chisquareCdf from "@stdlib/stats-base-dists-chisquare-cdf";
-import { DiagnosisError, kaplanMeier, logRank, type SurvivalObservation } from "@/lib/diagnosis";
+import { DiagnosisError, kaplanMeier, kaplanMeierOfTally, logRank, logRankOfTally, tallyObservations, type SurvivalObservation } from "@/lib/diagnosis";
 import { chiSquareSurvival1 } from "@/lib/diagnosis/survival";
 
 const obs = (events: number[], censored: number[]): SurvivalObservation[] => [
@@ -218,5 +218,24 @@ describe("logRank", () => {
         expect(r.pValue).toBeLessThanOrEqual(1);
       }),
     );
+  });
+});
+
+describe("counted observations", () => {
+  it("give the same curve and test as the observations one by one (property)", () => {
+    const observation = fc.record({ time: fc.integer({ min: 0, max: 15 }), event: fc.boolean() });
+    fc.assert(
+      fc.property(fc.array(observation, { maxLength: 40 }), fc.array(observation, { maxLength: 40 }), (a, b) => {
+        // Splitting a time's counts over several rows must not change anything either.
+        const split = (rows: ReturnType<typeof tallyObservations>) => rows.flatMap((r) => [{ ...r, events: 0 }, { ...r, censored: 0 }]);
+        expect(kaplanMeierOfTally(split(tallyObservations(a)))).toEqual(kaplanMeier(a));
+        expect(logRankOfTally(split(tallyObservations(a)), tallyObservations(b))).toEqual(logRank(a, b));
+      }),
+    );
+  });
+
+  it("refuses counts that are not whole numbers", () => {
+    expect(() => kaplanMeierOfTally([{ time: 1, events: 0.5, censored: 0 }])).toThrow(DiagnosisError);
+    expect(() => logRankOfTally([{ time: 1, events: 1, censored: -1 }], [])).toThrow(DiagnosisError);
   });
 });
