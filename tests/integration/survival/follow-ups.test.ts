@@ -131,7 +131,7 @@ describe("upgrade advice where the record bears it", () => {
     const repair = (serial: string) => ({ ...t, serial, closedAt: day("2026-01-01"), primary: "crank-seal-worn" });
     // 30 repairs with the seal and grease barrier, one back for a seal fault after 40 days; 30 without, 15 back.
     const withIds = await insertCases(ids, Array.from({ length: 30 }, (_, i) => repair(`W${i}`)));
-    const withoutIds = await insertCases(ids, Array.from({ length: 30 }, (_, i) => repair(`N${i}`)));
+    await insertCases(ids, Array.from({ length: 30 }, (_, i) => repair(`N${i}`)));
     for (const id of withIds) await fit(id, "crank-seal-barrier");
     const back = (serial: string) => ({ ...t, serial, status: "on_bench" as const, createdAt: day("2026-02-10"), primary: "housing-gasket-failed" });
     await insertCases(ids, [back("W0"), ...Array.from({ length: 15 }, (_, i) => back(`N${i}`))]);
