@@ -1,12 +1,11 @@
 import Link from "next/link";
 import { Panel } from "@/components/ui/panel";
 import type { CaseStatus } from "@/db/schema";
+import { formatDay } from "@/lib/format";
 import { upgradeAdviceFor } from "@/lib/survival/advice-query";
 import type { RidingUse } from "@/lib/survival/follow-ups";
 import { warrantyReturnOf } from "@/lib/survival/warranty";
 import { UpgradeAdviceList } from "./upgrade-advice-list";
-
-const day = (d: Date) => d.toISOString().slice(0, 10);
 
 /**
  * On the case page: whether this visit is within the warranty of an earlier repair, and, while the
@@ -23,7 +22,7 @@ export async function CaseFollowUp({ kase }: { kase: { id: number; status: CaseS
       {warranty ? (
         <p role="note" data-testid="warranty-note" className="rounded-md border border-amber bg-amber-light p-3 text-sm text-amber">
           Warranty return: this unit was repaired under <Link href={`/cases/${warranty.repairId}`} className="font-mono">{warranty.repairReference}</Link>,
-          closed {day(warranty.repairClosedAt)}, {warranty.days} days before this visit (within the {warranty.months}-month warranty).
+          closed {formatDay(warranty.repairClosedAt)}, {warranty.days} days before this visit (within the {warranty.months}-month warranty).
         </p>
       ) : null}
       {advice ? (

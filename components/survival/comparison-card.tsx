@@ -3,8 +3,9 @@ import { formatP, type UpgradeComparison } from "@/lib/survival/compare";
 import { groupLabel } from "@/lib/survival/groups";
 import { curvePoints } from "./curve-points";
 import { SurvivalChart } from "./survival-chart";
+import { percent } from "@/lib/format";
 
-const share = (v: number | null) => (v === null ? "—" : `${Math.round(v * 100)} %`);
+const share = (v: number | null) => (v === null ? "—" : percent(v));
 const VERDICT_STYLE = {
   better: "bg-moss-light text-moss",
   worse: "bg-danger-light text-danger",

@@ -1,6 +1,7 @@
 "use client";
 import { Area, CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { COPPER, GRID, INK, INK_FAINT, MOSS } from "@/components/reports/chart-colors";
+import { percent } from "@/lib/format";
 
 export interface CurvePoint {
   /** Months since the repair was closed. */
@@ -16,7 +17,6 @@ export interface Curve {
 }
 
 const COLOURS = [MOSS, COPPER];
-const percent = (v: number) => `${Math.round(v * 100)} %`;
 
 /** Return-free survival as step lines with their 95 % bands; the tables beside it hold the same numbers. */
 export function SurvivalChart({ curves, months, label }: { curves: Curve[]; months: number; label: string }) {

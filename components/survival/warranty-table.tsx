@@ -1,6 +1,7 @@
 import { NumberTable } from "@/components/reports/number-table";
 import type { GroupWarranty } from "@/lib/survival/report";
 import { groupLabel } from "@/lib/survival/groups";
+import { percent } from "@/lib/format";
 
 export function WarrantyTable({ rows, months }: { rows: GroupWarranty[]; months: number }) {
   return (
@@ -13,7 +14,7 @@ export function WarrantyTable({ rows, months }: { rows: GroupWarranty[]; months:
         { key: "group", label: "Repaired fault", cell: (r) => groupLabel(r.group) },
         { key: "repairs", label: "Repairs", numeric: true, cell: (r) => r.repairs },
         { key: "back", label: "Back in warranty", numeric: true, cell: (r) => r.backInWarranty },
-        { key: "share", label: `Share back by ${months} months`, numeric: true, cell: (r) => `${Math.round(r.shareByWarrantyEnd * 100)} %` },
+        { key: "share", label: `Share back by ${months} months`, numeric: true, cell: (r) => percent(r.shareByWarrantyEnd) },
       ]}
     />
   );

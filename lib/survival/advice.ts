@@ -1,6 +1,7 @@
 import type { UpgradeComparison } from "./compare";
 import { groupLabel } from "./groups";
 import type { Upgrade } from "./upgrades";
+import { percent } from "@/lib/format";
 
 export interface UpgradeAdvice {
   upgrade: Upgrade;
@@ -17,7 +18,6 @@ export interface AdviceSummary {
   items: UpgradeAdvice[];
 }
 
-const back = (s: number | null) => `${Math.round((1 - (s ?? 1)) * 100)} %`;
 
 /**
  * What the shop's own record says about each upgrade for one family and riding use. Only a
@@ -36,7 +36,7 @@ export function adviceFrom(comparisons: UpgradeComparison[], basis: string): Adv
       return {
         upgrade, kind: "supported", text: verdict.text,
         callerText: `Of the ${basis}, those fitted with ${upgrade.phrase} came back with a ${groupLabel(upgrade.guards)} fault less often: ` +
-          `${back(a)} against ${back(b)} within ${verdict.months} months (${fitted.n} and ${notFitted.n} repairs). We can fit it while the unit is open; ask us for the price.`,
+          `${percent(1 - (a ?? 1))} against ${percent(1 - (b ?? 1))} within ${verdict.months} months (${fitted.n} and ${notFitted.n} repairs). We can fit it while the unit is open; ask us for the price.`,
       };
     }),
   };

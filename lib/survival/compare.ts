@@ -2,6 +2,7 @@ import { kaplanMeierOfTally, logRankOfTally, type KaplanMeierStep, type Survival
 import type { FollowUpCount } from "./follow-ups";
 import { groupLabel, type CauseGroup } from "./groups";
 import { UPGRADES, type Upgrade } from "./upgrades";
+import { percent } from "@/lib/format";
 
 export const DAYS_PER_MONTH = 30.44;
 export const CHECKPOINT_MONTHS = [3, 6, 12] as const;
@@ -96,7 +97,6 @@ export function arm(tally: SurvivalTally[]): Arm {
   };
 }
 
-const pct = (s: number) => `${Math.round((1 - s) * 100)} %`;
 export const formatP = (p: number) => (p < 0.001 ? "p < 0.001" : `p = ${p.toFixed(p < 0.01 ? 3 : 2)}`);
 
 /** What the record supports, in words; says "too early" rather than guess. */
@@ -121,7 +121,7 @@ export function verdictFor(upgrade: Upgrade, fitted: Arm, notFitted: Arm, pValue
   }
   const a = fitted.checkpoints.find((c) => c.months === months)!.survival!;
   const b = notFitted.checkpoints.find((c) => c.months === months)!.survival!;
-  const figures = `${pct(a)} with vs ${pct(b)} without by ${months} months (${formatP(pValue)}; ${counts})`;
+  const figures = `${percent(1 - a)} with vs ${percent(1 - b)} without by ${months} months (${formatP(pValue)}; ${counts})`;
   if (pValue >= ALPHA) {
     return { kind: "no_difference", months, text: `No difference shown: units with ${upgrade.phrase} came back for ${group} faults at ${figures}. The record does not show that it helps.` };
   }

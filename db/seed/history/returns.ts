@@ -1,8 +1,8 @@
 import type { UpgradeKind } from "@/db/schema";
 import { groupOfArea, type CauseGroup } from "@/lib/survival/groups";
 import { UPGRADES } from "@/lib/survival/upgrades";
-import type { Cause, Scenario } from "@/lib/content/catalogue";
-import { Random } from "./random";
+import type { Cause, Scenario } from "@/db/seed/content";
+import { Random } from "@/lib/random";
 
 const DAY = 86_400_000;
 

@@ -5,13 +5,12 @@ import { SurvivalFilterBar } from "@/components/survival/survival-filter";
 import { WarrantyTable } from "@/components/survival/warranty-table";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
+import { formatDay } from "@/lib/format";
 import { familyOptions } from "@/lib/reports/scope";
 import { parseSurvivalFilter } from "@/lib/survival/filter";
 import { loadSurvivalReport } from "@/lib/survival/report";
 
 export const metadata: Metadata = { title: "Does it last?" };
-
-const dayLabel = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 export default async function LastingPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requireRole("reports:read", "/reports/lasting");
@@ -25,7 +24,7 @@ export default async function LastingPage({ searchParams }: { searchParams: Prom
         <p className="text-sm"><Link href="/reports">Shop reports</Link></p>
         <h1>Does the repair last?</h1>
         <p className="text-ink-soft" data-testid="lasting-scope">
-          Repairs closed from {dayLabel.format(report.from)} to today, {report.familyName ?? "all motor families"}, {report.filter.ridingUse ? `${report.filter.ridingUse} riding` : "all riding uses"}.
+          Repairs closed from {formatDay(report.from)} to today, {report.familyName ?? "all motor families"}, {report.filter.ridingUse ? `${report.filter.ridingUse} riding` : "all riding uses"}.
         </p>
       </div>
       <SurvivalFilterBar filter={report.filter} families={families} />
