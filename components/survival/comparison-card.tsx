@@ -28,6 +28,7 @@ export function ComparisonCard({ comparison, months }: { comparison: UpgradeComp
           {pValue !== null ? <> Log-rank test: <strong data-testid="p-value">{formatP(pValue)}</strong>.</> : null}
         </p>
         <p role="note" data-testid="verdict" className={`rounded-md p-2 text-sm ${VERDICT_STYLE[verdict.kind]}`}>{verdict.text}</p>
+        {fitted.n + notFitted.n === 0 ? null : <>
         <SurvivalChart months={months} label={`Return-free share over months since the repair, fitted and not fitted with ${upgrade.phrase}; the tables below hold the numbers`}
           curves={arms.filter((a) => a.arm.n > 0).map((a) => ({ key: a.key, name: `${a.name} (n = ${a.arm.n})`, points: curvePoints(a.arm, months) }))} />
         <div className="overflow-x-auto">
@@ -64,6 +65,7 @@ export function ComparisonCard({ comparison, months }: { comparison: UpgradeComp
             ))}
           </tbody>
         </table>
+        </>}
       </div>
     </Panel>
   );

@@ -4,6 +4,7 @@ import { groupLabel } from "@/lib/survival/groups";
 import { percent } from "@/lib/format";
 
 export function WarrantyTable({ rows, months }: { rows: GroupWarranty[]; months: number }) {
+  if (rows.length === 0) return <p className="text-sm text-ink-soft">No repairs with a serial were closed in this selection.</p>;
   return (
     <NumberTable
       caption={`Repairs by cause group and how many came back for the same kind of fault within the ${months}-month warranty`}

@@ -104,6 +104,7 @@ export function verdictFor(upgrade: Upgrade, fitted: Arm, notFitted: Arm, pValue
   const group = groupLabel(upgrade.guards);
   const counts = `n = ${fitted.n} with, ${notFitted.n} without`;
   const returns = fitted.returns + notFitted.returns;
+  if (fitted.n + notFitted.n === 0) return { kind: "too_few", text: `No repairs of ${group} faults in this selection yet.` };
   if (fitted.n < MIN_REPAIRS_PER_ARM || notFitted.n < MIN_REPAIRS_PER_ARM || returns < MIN_RETURNS || pValue === null) {
     return {
       kind: "too_few",

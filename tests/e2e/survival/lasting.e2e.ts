@@ -52,7 +52,7 @@ describe("does the repair last?", () => {
     // A family and use with too few repairs says so instead of drawing a conclusion.
     await lasting.filter({ family: "Brightholm Ostra Gen 2", use: "cargo" });
     const verdicts = await page.getByTestId("verdict").allTextContents();
-    expect(verdicts.every((v) => v.startsWith("Too early to tell"))).toBe(true);
+    expect(verdicts.every((v) => v.startsWith("Too early to tell") || v.startsWith("No repairs of"))).toBe(true);
     await shot(page, "lasting-too-few");
   });
 
@@ -65,7 +65,7 @@ describe("does the repair last?", () => {
 
     const form = new TriageNewPage(page);
     await form.open();
-    await form.fill({ callerName: "Ines Varrow", family: "Orvanta Tessel Gen 2", serial: "TS2-40417", ridingUse: "trail", symptom: "Pedals slip or no drive" });
+    await form.fill({ callerName: "Ines Varrow", phone: "+00 555 0142 7781", family: "Orvanta Tessel Gen 2", serial: "TS2-40417", ridingUse: "trail", symptom: "Pedals slip or no drive" });
     await form.start();
     await page.waitForURL(/\/triage\/\d+$/);
     const walk = new TriageWalkPage(page);
