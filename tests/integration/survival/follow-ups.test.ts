@@ -10,7 +10,8 @@ import { reopenCaseAction, saveOutcomeAction, startBenchAction } from "@/lib/out
 import { upgradeAdviceFor } from "@/lib/survival/advice-query";
 import { compareUpgrades, tallyOf } from "@/lib/survival/compare";
 import { followUps, type FollowUpCount } from "@/lib/survival/follow-ups";
-import { warrantyReturnOf } from "@/lib/survival/warranty";
+import { saveWarrantyAction } from "@/lib/survival/actions";
+import { loadWarrantyMonths, warrantyReturnOf } from "@/lib/survival/warranty";
 import { createRoleUsers } from "../../support/db";
 import { resetToDemo } from "../../support/seed";
 import { day, demoIds, insertCases, type DemoIds } from "../reports/fixtures";
@@ -153,5 +154,19 @@ describe("upgrade advice where the record bears it", () => {
     expect(byKind("crank-seal-barrier").callerText).toContain("3 % against 50 % within 3 months (30 and 30 repairs)");
     expect(byKind("sealed-bearings").kind).toBe("too_few"); // never fitted: nothing to compare
     expect(byKind("sealed-screws").kind).toBe("too_few");
+  });
+});
+
+describe("the warranty period setting", () => {
+  it("is six months until the administrator changes it; bad input leaves it as it was", async () => {
+    await resetToDemo();
+    const users = await createRoleUsers();
+    expect(await loadWarrantyMonths()).toBe(6);
+    const bad = await executeAction(saveWarrantyAction, { months: "0" }, users.admin);
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.fieldErrors?.months).toBe("At least one month.");
+    expect(await loadWarrantyMonths()).toBe(6);
+    expect((await executeAction(saveWarrantyAction, { months: "12" }, users.admin)).ok).toBe(true);
+    expect(await loadWarrantyMonths()).toBe(12);
   });
 });

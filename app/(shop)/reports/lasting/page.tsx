@@ -2,18 +2,21 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ComparisonCard } from "@/components/survival/comparison-card";
 import { SurvivalFilterBar } from "@/components/survival/survival-filter";
+import { WarrantyForm } from "@/components/survival/warranty-form";
 import { WarrantyTable } from "@/components/survival/warranty-table";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
+import { may } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
 import { familyOptions } from "@/lib/reports/scope";
 import { parseSurvivalFilter } from "@/lib/survival/filter";
 import { loadSurvivalReport } from "@/lib/survival/report";
+import { saveWarranty } from "./actions";
 
 export const metadata: Metadata = { title: "Does it last?" };
 
 export default async function LastingPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  await requireRole("reports:read", "/reports/lasting");
+  const user = await requireRole("reports:read", "/reports/lasting");
   const filter = parseSurvivalFilter(await searchParams);
   const [report, families] = await Promise.all([loadSurvivalReport(filter), familyOptions()]);
   const months = Math.max(12, report.filter.months);
@@ -39,6 +42,7 @@ export default async function LastingPage({ searchParams }: { searchParams: Prom
       </Panel>
       <Panel title={`Back within the ${report.warrantyMonths}-month warranty`}>
         <WarrantyTable rows={report.warranty} months={report.warrantyMonths} />
+        {may(user.role, "settings:edit") ? <div className="mt-4"><WarrantyForm months={report.warrantyMonths} action={saveWarranty} /></div> : null}
       </Panel>
       <div className="grid gap-6 xl:grid-cols-2">
         {report.comparisons.map((c) => <ComparisonCard key={c.upgrade.slug} comparison={c} months={months} />)}
