@@ -34,9 +34,9 @@ function groupOf(column: string) {
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
 }
 
-/** The cause group an upgrade guards, in SQL, for an outcome_upgrades.upgrade column. */
-function guardsOf(column: string) {
-  return pg.unsafe(`(case ${UPGRADES.map((u) => `when ${column} = '${u.slug}' then '${u.guards}'`).join(" ")} end)`);
+/** (upgrade, the cause group it guards) rows for a VALUES list; the slugs are our own fixed list. */
+function guards() {
+  return pg.unsafe(UPGRADES.map((u) => `('${u.slug}', '${u.guards}')`).join(", "));
 }
 
 /**
@@ -86,7 +86,7 @@ export function followUpQuery(scope: FollowUpScope) {
     union all
     select 'fitted', u.upgrade, r.days, r.event, count(*)::int
     from ended r join outcome_upgrades u on u.case_id = r.id
-    where r.grp = ${guardsOf("u.upgrade")}
+    join (values ${guards()}) g(upgrade, grp) on g.upgrade = u.upgrade and g.grp = r.grp
     group by u.upgrade, r.days, r.event`;
 }
 

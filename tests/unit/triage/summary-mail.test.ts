@@ -30,4 +30,14 @@ describe("the summary e-mail", () => {
     expect(m.text).not.toMatch(/ROUGH QUOTE|HOW TO SEND|STOP RIDING/);
     expect(m.text).toContain("OUR ADVICE\n- Update the display firmware.");
   });
+
+  it("carries upgrade advice the shop's record supports, and no such section without it", () => {
+    const line = "Of the Family X units we repaired, those fitted with the uprated clutch came back with a clutch fault less often.";
+    const m = composeSummaryMail({ ...base, upgradeAdvice: [line] });
+    expect(m.text).toContain("UPGRADES THAT HAVE HELPED UNITS LIKE YOURS");
+    expect(m.text).toContain(`- ${line}`);
+    expect(m.html).toContain("<h3>Upgrades that have helped units like yours</h3>");
+    expect(composeSummaryMail(base).text).not.toContain("UPGRADES THAT HAVE HELPED");
+    expect(composeSummaryMail({ ...base, outcome: "advised", quote: null, upgradeAdvice: [line] }).text).not.toContain("UPGRADES THAT HAVE HELPED");
+  });
 });
