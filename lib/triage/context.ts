@@ -27,6 +27,7 @@ interface Row {
   status: CaseStatus;
   family_id: number;
   tree_version_id: number;
+  created_ms: number;
   steps: [number, number, number, number][];
   settings: unknown;
   settings_hash: string | null;
@@ -36,11 +37,12 @@ interface Row {
 /**
  * The case, its steps, the shop's settings and the tree's likelihood setting (one query, no lock),
  * then the confirmed history of the case's motor family and, for a tree set to "learned", the
- * likelihoods learned from its closed cases.
+ * likelihoods learned from its closed cases. With `historyAsOfStart`, the history counts only
+ * cases closed before this one was started, as its technician's screen did.
  */
-export async function loadCaseContext(caseId: number): Promise<CaseContext | null> {
+export async function loadCaseContext(caseId: number, options: { historyAsOfStart?: boolean } = {}): Promise<CaseContext | null> {
   const [row] = await sql<Row[]>`
-    select c.id, c.reference, c.status, c.family_id, c.tree_version_id,
+    select c.id, c.reference, c.status, c.family_id, c.tree_version_id, (extract(epoch from c.created_at) * 1000)::float8 as created_ms,
       coalesce((select json_agg(json_build_array(s.id, s.seq, s.node_id, s.option_id) order by s.seq)
                 from case_steps s where s.case_id = c.id), '[]'::json) as steps,
       st.value as settings, md5(st.value::text) as settings_hash,
@@ -48,7 +50,8 @@ export async function loadCaseContext(caseId: number): Promise<CaseContext | nul
     from cases c left join settings st on st.key = ${DIAGNOSIS_SETTINGS_KEY}
     where c.id = ${caseId}`;
   if (!row) return null;
-  const settings = dxSettingsFor(row.settings, await familyHistory(row.family_id));
+  const history = await familyHistory(row.family_id, options.historyAsOfStart ? new Date(row.created_ms) : undefined);
+  const settings = dxSettingsFor(row.settings, history);
   if (row.likelihood_mode === "learned") settings.likelihoods = await learnedLikelihoodsFor(row.tree_version_id);
   return {
     id: row.id,
