@@ -49,6 +49,8 @@ export const sessions = pgTable(
     id: text("id").primaryKey(),
     userId: text("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
     expiresAt: ts("expires_at").notNull(),
+    /** Sign-in time: a session ends at the absolute lifetime after it, however active. */
+    createdAt: createdAt(),
   },
   (t) => [index("sessions_user_idx").on(t.userId)],
 );
@@ -63,8 +65,27 @@ export const signInAttempts = pgTable(
     ip: text("ip"),
     at: ts("at").notNull().defaultNow(),
   },
-  (t) => [index("sign_in_attempts_email_at_idx").on(t.email, t.at)],
+  (t) => [index("sign_in_attempts_email_at_idx").on(t.email, t.at), index("sign_in_attempts_ip_at_idx").on(t.ip, t.at)],
 );
+
+export const ACCOUNT_TOKEN_PURPOSES = ["invite", "reset"] as const;
+export type AccountTokenPurpose = (typeof ACCOUNT_TOKEN_PURPOSES)[number];
+/** One-time links sent by e-mail (invitations, password resets); only the token's SHA-256 hash is stored. */
+export const accountTokens = pgTable(
+  "account_tokens",
+  {
+    id: text("id").primaryKey(),
+    userId: text("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    purpose: text("purpose").$type<AccountTokenPurpose>().notNull(),
+    expiresAt: ts("expires_at").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("account_tokens_user_idx").on(t.userId),
+    check("account_tokens_purpose_check", sql`${t.purpose} in (${inList(ACCOUNT_TOKEN_PURPOSES)})`),
+  ],
+);
+export type AccountToken = typeof accountTokens.$inferSelect;
 
 export const settings = pgTable("settings", {
   key: text("key").primaryKey(),

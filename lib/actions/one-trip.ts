@@ -4,6 +4,7 @@ import { callerCheck, sessionWantsExtending } from "@/lib/auth/caller-check";
 import type { Capability } from "@/lib/auth/roles";
 import type { ActionSpec, ActionSuccess } from "./define";
 import { formDataToObject } from "./form-data";
+import { logFailure } from "@/lib/log/failure";
 
 export interface OneTripOutcome<R> {
   result: ActionSuccess<R>;
@@ -31,7 +32,7 @@ export async function tryInOneTrip<S extends z.ZodType, R>(
     done = await spec.inOneTrip(parsed.data, check);
   } catch (error) {
     // Nothing was written; the ordinary path runs the same work again and answers the caller.
-    console.error(`action ${spec.name}: the one-trip path failed, using the ordinary one`, error);
+    logFailure(`action ${spec.name}: the one-trip path failed, using the ordinary one`, error);
     return null;
   }
   if (!done) return null;

@@ -1,7 +1,7 @@
 import "server-only";
 import type { PendingQuery, Row, Sql } from "postgres";
 import { CAPABILITIES, type Capability, type Role } from "./roles";
-import { SESSION_LIFETIME } from "./lucia";
+import { SESSION_ABSOLUTE_LIFETIME, SESSION_LIFETIME } from "./lucia";
 import { hashToken } from "./token";
 
 /**
@@ -21,14 +21,16 @@ export function callerCheck(token: string | undefined | null, capability: Capabi
 
 /**
  * The caller's row, for a CTE: at most one (user_id, expires_at), and only for a session that
- * has not expired, of an active user, whose role the capability allows. These are the rules of
+ * has not expired (idle window and absolute lifetime), of an active user, whose role the capability allows. These are the rules of
  * validateToken (lucia's validateSession plus the active flag) and authorize(), so a statement
  * built on it writes exactly when the ordinary path would have let the caller in.
  */
 export function callerRow(sql: Sql, check: CallerCheck): PendingQuery<Row[]> {
   return sql`
     select u.id as user_id, s.expires_at from sessions s join users u on u.id = s.user_id
-    where s.id = ${check.sessionId} and s.expires_at > now() and u.active and u.role = any(${sql.array([...check.roles])}::text[])`;
+    where s.id = ${check.sessionId} and s.expires_at > now()
+      and s.created_at > now() - make_interval(secs => ${SESSION_ABSOLUTE_LIFETIME.seconds()})
+      and u.active and u.role = any(${sql.array([...check.roles])}::text[])`;
 }
 
 /** lucia extends a session once less than half its lifetime is left; so does the one-trip path. */

@@ -1,0 +1,22 @@
+"use client";
+import { useActionState } from "react";
+import { setUpShop } from "@/app/(auth)/setup/actions";
+import { Field } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { NewPasswordFields } from "./password-fields";
+
+export function SetupForm() {
+  const [state, action] = useActionState(setUpShop, null);
+  const errors = state && !state.ok ? state.fieldErrors ?? {} : {};
+  const fields = state && !state.ok ? state.fields ?? {} : {};
+  return (
+    <form action={action} noValidate className="flex flex-col gap-4">
+      <Field label="Your name" name="name" autoComplete="name" defaultValue={fields.name} error={errors.name} key={`n${fields.name ?? ""}`} />
+      <Field label="Your e-mail address" name="email" type="email" autoComplete="username" defaultValue={fields.email} error={errors.email} key={`e${fields.email ?? ""}`} />
+      <NewPasswordFields errors={errors} label="Password" />
+      <FormMessage state={state} />
+      <SubmitButton pendingText="Setting up…">Create the administrator account</SubmitButton>
+    </form>
+  );
+}
