@@ -1,3 +1,5 @@
+import { DrizzleQueryError } from "drizzle-orm/errors";
+
 /**
  * Logs an unexpected failure without the data it carried. A failed query is logged by its SQL
  * text, SQLSTATE and constraint only: drizzle puts the bound parameters into its error message
@@ -30,11 +32,10 @@ const isPgError = (e: unknown): e is Error & DbErrorShape =>
 
 /** One line (plus the stack of where it was thrown) that never repeats a query's parameters. */
 export function describeFailure(error: unknown): string {
-  if (error instanceof Error && error.name === "DrizzleQueryError") {
-    const query = (error as { query?: unknown }).query;
-    const cause = (error as { cause?: unknown }).cause;
+  if (error instanceof DrizzleQueryError) {
+    const cause = error.cause;
     const reason = isPgError(cause) ? pgPart(cause) : cause instanceof Error ? cause.name : "unknown cause";
-    return `query failed (${reason}): ${typeof query === "string" ? query : "?"}`;
+    return `query failed (${reason}): ${error.query}`;
   }
   if (isPgError(error)) {
     const query = (error as { query?: unknown }).query; // postgres.js sets it, not enumerable
