@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq, gt } from "drizzle-orm";
-import { db, type Db, type Tx } from "@/db";
+import type { Db, Tx } from "@/db";
 import { accountTokens, users, type AccountTokenPurpose } from "@/db/schema";
 import { hashToken, newSessionToken } from "./token";
 

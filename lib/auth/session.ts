@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { cookies } from "next/headers";
 import { cache } from "react";
-import { db, type Db, type Tx } from "@/db";
+import type { Db, Tx } from "@/db";
 import { sessions } from "@/db/schema";
 import { hashToken, newSessionToken } from "./token";
 import { lucia, SESSION_ABSOLUTE_LIFETIME, SESSION_COOKIE } from "./lucia";

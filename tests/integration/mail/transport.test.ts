@@ -18,7 +18,7 @@ async function startRelay(options: { offerTls: boolean; requireLogin?: boolean }
     disabledCommands: options.offerTls ? [] : ["STARTTLS"],
     authOptional: !options.requireLogin,
     onAuth(auth, _session, callback) {
-      login = { user: auth.username, password: auth.password };
+      login = { user: auth.username, password: auth.password ?? undefined };
       callback(null, { user: auth.username });
     },
     onData(stream, session, callback) {
