@@ -26,6 +26,9 @@ export const setupInput = z.object({
     .pipe(z.email("That is not an e-mail address.")),
   password: newPasswordField,
   confirm: z.string().max(200),
+  shopName: z.string().trim().min(1, "Enter the workshop's name.").max(120, "Keep the name under 120 characters."),
+  shopEmail: z.string().trim().toLowerCase().min(1, "Enter the workshop's e-mail address.").max(200, "That address is too long.")
+    .pipe(z.email("That is not an e-mail address.")),
 });
 
 const CLOSED = "This shop is set up already. Sign in, or ask an administrator to invite you.";
@@ -51,6 +54,9 @@ export const setupAction = defineAction({
         .onConflictDoNothing().returning({ key: settings.key });
       if (n > 0 || latched.length === 0) throw new AppError("conflict", CLOSED);
       await tx.insert(users).values({ id, name: input.name, email: input.email, role: "admin", passwordHash });
+      // The shop's own name and address sign its e-mail to customers (instead of the demo workshop's).
+      await tx.insert(settings).values({ key: "workshop", value: { name: input.shopName, email: input.shopEmail, phone: "", openingHours: "" } })
+        .onConflictDoUpdate({ target: settings.key, set: { value: { name: input.shopName, email: input.shopEmail, phone: "", openingHours: "" } } });
     });
     const { cookie } = await createSession(id);
     return { ok: true as const, data: { id, cookie }, message: "Your shop is ready." };

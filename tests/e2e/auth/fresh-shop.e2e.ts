@@ -45,7 +45,7 @@ describe.skipIf(!FRESH)("a shop of its own: setup, invitation, first sign-in", (
   });
 
   it("setup creates the administrator, who lands on the people page", async () => {
-    await new SetupPage(admin.page, base).createAdmin("Rowan Fettle", adminEmail, "brass ratchet lighthouse");
+    await new SetupPage(admin.page, base).createAdmin("Rowan Fettle", adminEmail, "brass ratchet lighthouse", { name: "Fettle Drive Works", email: "desk@fresh-shop.rootbench.test" });
     await admin.page.waitForURL(/\/users\?welcome=1/);
     await admin.page.getByText("Your shop is set up").waitFor();
     await screenshot(admin.page, "fresh-shop-2-people");

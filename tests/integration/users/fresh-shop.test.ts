@@ -9,7 +9,7 @@ import { countRows, createUser, db, truncateAll } from "../../support/db";
 
 const PASSWORD = "copper winding ninety";
 const setup = (email: string, password = PASSWORD) =>
-  executeAction(setupAction, { name: "Shop Owner", email, password, confirm: password }, null);
+  executeAction(setupAction, { name: "Shop Owner", email, password, confirm: password, shopName: "Lantern Lane Drive Repairs", shopEmail: "desk@lantern-lane.rootbench.test" }, null);
 
 describe("a shop of its own (ROOTBENCH_DEMO=0)", () => {
   beforeEach(async () => {
@@ -40,6 +40,8 @@ describe("a shop of its own (ROOTBENCH_DEMO=0)", () => {
     if (!first.ok) return;
     const session = await validateToken(first.data.cookie.value);
     expect(session?.user).toMatchObject({ email: "owner@rootbench.test", role: "admin" });
+    const { loadShop } = await import("@/lib/cases/shop");
+    expect(await loadShop()).toMatchObject({ name: "Lantern Lane Drive Repairs", email: "desk@lantern-lane.rootbench.test" });
     expect(await setupOpen()).toBe(false);
     const second = await setup("intruder@rootbench.test");
     expect(second.ok).toBe(false);

@@ -26,7 +26,7 @@ export const rows: EntryPointRows = {
   {
     // On the demo database the shop is set up already: a valid request gets its 409, never 401/403.
     file: "app/(auth)/setup/actions.ts", exportName: "setUpShop", spec: setupAction as AnySpec, allowed: "public",
-    sample: () => ({ name: "First Admin", email: `first-${unique()}@rootbench.test`, password: NEW_PASSWORD, confirm: NEW_PASSWORD }),
+    sample: () => ({ name: "First Admin", email: `first-${unique()}@rootbench.test`, password: NEW_PASSWORD, confirm: NEW_PASSWORD, shopName: "Test Workshop", shopEmail: "desk@rootbench.test" }),
   },
   {
     file: "app/(auth)/reset-password/actions.ts", exportName: "requestReset", spec: requestResetAction as AnySpec, allowed: "public",
