@@ -2,7 +2,7 @@ import { NextResponse, type NextRequest } from "next/server";
 import { isSameOrigin } from "./lib/http/origin";
 import { contentSecurityPolicy, strictTransportSecurity } from "./lib/http/security-headers";
 
-const PUBLIC_PATHS = ["/sign-in", "/setup", "/invite", "/reset-password", "/api/health", "/favicon.ico", "/icon.svg"];
+const PUBLIC_PATHS = ["/sign-in", "/setup", "/invite", "/reset-password", "/api/health", "/favicon.ico", "/icon.svg", "/robots.txt"];
 
 // Cheap, optimistic checks only; the real rules are enforced in lib/auth on every entry point.
 // Also the per-request CSP nonce: Next reads it from the request's CSP header and stamps it on its scripts.

@@ -3,7 +3,7 @@ import { count, inArray, notInArray } from "drizzle-orm";
 import { db, sql } from "@/db";
 import { users } from "@/db/schema";
 import { isDemoMode } from "@/lib/auth/demo-mode";
-import { loadContent } from "@/lib/content/catalogue";
+import { loadContent } from "@/db/seed/content";
 import { DEMO_ACCOUNTS } from "./accounts";
 import { seedCatalogue } from "./catalogue";
 import { seedHistory } from "./history";

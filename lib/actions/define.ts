@@ -5,7 +5,7 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, isAppError } from "@/lib/errors";
 import { formDataToObject, echoFields } from "./form-data";
 import { logFailure } from "@/lib/log/failure";
-import { CONTROL_CHARACTER_MESSAGE, fieldWithControlCharacter } from "@/lib/validation/control-characters";
+import { CONTROL_CHARACTER_MESSAGE, fieldWithControlCharacter } from "@/lib/http/control-characters";
 
 export type ActionFailure = {
   ok: false;

@@ -6,7 +6,7 @@ import { validateToken, type SessionUser } from "@/lib/auth/session";
 import { isAppError } from "@/lib/errors";
 import { isSameOrigin } from "./origin";
 import { logFailure } from "@/lib/log/failure";
-import { CONTROL_CHARACTER_MESSAGE, fieldWithControlCharacter } from "@/lib/validation/control-characters";
+import { CONTROL_CHARACTER_MESSAGE, fieldWithControlCharacter } from "@/lib/http/control-characters";
 
 export interface RouteContext<P> {
   user: SessionUser;
