@@ -87,6 +87,20 @@ describe.skipIf(!FRESH)("a shop of its own: setup, invitation, first sign-in", (
     await screenshot(tech.page, "fresh-shop-6-used-link");
   });
 
+  it("the technician's account page changes the password and signs out everywhere", async () => {
+    await tech.page.goto(`${base}/`);
+    await tech.page.getByTestId("signed-in-as").click();
+    await tech.page.waitForURL(/\/account$/);
+    await tech.page.getByLabel("Current password").fill("oily chain sunrise");
+    await tech.page.getByLabel("New password").fill("quiet freewheel harbour");
+    await tech.page.getByLabel("Repeat it").fill("quiet freewheel harbour");
+    await tech.page.getByRole("button", { name: "Change password" }).click();
+    await tech.page.getByText("Password changed. You are signed out everywhere else.").waitFor();
+    await screenshot(tech.page, "fresh-shop-7-account");
+    await tech.page.getByRole("button", { name: "Sign out everywhere" }).click();
+    await tech.page.waitForURL(/\/sign-in/);
+  });
+
   it("the browsers saw no errors (the CSP blocked nothing of ours)", () => {
     expect(admin.errors).toEqual([]);
     expect(tech.errors).toEqual([]);
