@@ -13,7 +13,7 @@ const SHOWN = 12;
 
 /**
  * Evidence review for the tree page: where the shop's closed cases disagree with the tree's
- * evidence (DESIGN §4, learning from outcomes), with one click to write the nearest strength into the draft.
+ * evidence (learning from outcomes), with one click to write the nearest strength into the draft.
  */
 export async function EvidenceSuggestions({ treeId }: { treeId: number }) {
   const [user, review] = await Promise.all([currentUser(), treeReview(treeId)]);

@@ -44,7 +44,7 @@ describe("evidence review from closed cases", () => {
     const review = await reviewVersion(versionId);
     expect(review.cases).toBe(30);
     const s = review.suggestions.find((x) => x.optionKey === OPTION && x.causeSlug === CAUSE)!;
-    // Hand computation from DESIGN §4: authored (1/3) / (1 + 1 + 1/3 + 1) = 0.1 (load, always, bumps, backwards;
+    // Hand computation from the definition: authored (1/3) / (1 + 1 + 1/3 + 1) = 0.1 (load, always, bumps, backwards;
     // don't-know left out); learned (N + m·P_editor) / (N + m) = (30 + 5·0.1) / 35 with m = 5.
     expect(s.authored).toBeCloseTo(0.1, 12);
     expect(s.learned).toBeCloseTo(30.5 / 35, 12);

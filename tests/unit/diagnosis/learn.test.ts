@@ -29,7 +29,7 @@ const closed: ClosedCase[] = [
   { answers: [answer("q", "no")], confirmedCauseId: "somewhere-else" },
 ];
 
-describe("learnLikelihoods (hand computation from the definition in DESIGN §4)", () => {
+describe("learnLikelihoods (hand computation from the definition)", () => {
   const learned = learnLikelihoods(tree, closed);
 
   it("smooths the counts towards the authored likelihoods with m = 5", () => {

@@ -13,7 +13,7 @@ const outcomes = [
 describe("choosing the strength nearest a learned likelihood", () => {
   it("normalises each candidate against the node's other answers", () => {
     const v = likelihoodByStrength(outcomes, "bumps");
-    // Hand computation from DESIGN §4 (weights 0, 1/3, 1, 3, 9; P = λ / Σλ with the other three answers at 1 each).
+    // Hand computation from the definition (weights 0, 1/3, 1, 3, 9; P = λ / Σλ with the other three answers at 1 each).
     expect(v.rules_out).toBe(0);
     expect(v.against).toBeCloseTo(1 / 3 / (1 / 3 + 3), 12);
     expect(v.neutral).toBeCloseTo(1 / 4, 12);
