@@ -2,7 +2,8 @@ import "server-only";
 import { sql } from "@/db";
 import type { CaseStatus } from "@/db/schema";
 import type { DxSettings } from "@/lib/diagnosis";
-import { learnedLikelihoodsFor } from "@/lib/review/learned";
+import type { LikelihoodMode } from "@/lib/review/in-use";
+import { likelihoodsFor } from "@/lib/review/learned";
 import { cachedCase, rememberCase, type StoredCase } from "./context-cache";
 import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
 import { familyHistory } from "./history";
@@ -62,8 +63,9 @@ export async function loadCaseContext(caseId: number, options: { reuse?: boolean
     rememberCase(stored);
   }
   const settings = dxSettingsFor(stored.storedSettings, await familyHistory(stored.familyId));
-  // A tree set to "learned" scores with likelihoods learned from closed cases (lib/review, cached there).
-  if (stored.basis.likelihoodMode === "learned") settings.likelihoods = await learnedLikelihoodsFor(stored.treeVersionId);
+  // The tree's setting and history may make triage score with likelihoods learned from closed cases (lib/review, cached there).
+  const learned = await likelihoodsFor(stored.treeVersionId, stored.basis.likelihoodMode as LikelihoodMode);
+  if (learned) settings.likelihoods = learned;
   return {
     id: stored.id,
     reference: stored.reference,

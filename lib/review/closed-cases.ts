@@ -1,6 +1,7 @@
 import "server-only";
 import { sql as pg } from "@/db";
-import type { ClosedCase } from "@/lib/diagnosis";
+import type { ClosedCase, DxSettings } from "@/lib/diagnosis";
+import { DIAGNOSIS_SETTINGS_KEY, parseDiagnosisSettings } from "@/lib/cases/dx-settings";
 
 const BATCH = 5000;
 
@@ -37,12 +38,23 @@ export async function closedCasesOf(versionId: number): Promise<ClosedCase[]> {
 export interface ClosedStamp {
   closed: number;
   latest: string | null;
+  /** The shop's diagnosis settings as stored: their strength weights make the authored side. */
+  settings: unknown;
 }
 
-/** How many closed cases a version has and when the last one closed: what a cached result depends on. */
+/**
+ * How many closed cases a version has, when the last one closed and the shop's diagnosis settings:
+ * what a learned result depends on.
+ */
 export async function closedStampOf(versionId: number): Promise<ClosedStamp> {
   const [row] = await pg<ClosedStamp[]>`
-    select count(*)::int as closed, max(closed_at)::text as latest
+    select count(*)::int as closed, max(closed_at)::text as latest,
+      (select value from settings where key = ${DIAGNOSIS_SETTINGS_KEY}) as settings
     from cases where tree_version_id = ${versionId} and status = 'closed'`;
   return row;
+}
+
+/** The shop's strength weights (defaults for any it has not set). */
+export function shopWeights(stamp: ClosedStamp): DxSettings["weights"] {
+  return parseDiagnosisSettings(stamp.settings).weights;
 }
