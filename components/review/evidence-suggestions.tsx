@@ -41,7 +41,7 @@ export async function EvidenceSuggestions({ treeId }: { treeId: number }) {
                 {review.suggestions.slice(0, SHOWN).map((s) => {
                   const inDraft = s.draftStrength === s.proposedStrength && s.currentStrength !== s.proposedStrength;
                   return (
-                    <li key={`${s.optionKey}|${s.causeSlug}`} className="flex flex-col gap-2 py-3" data-testid="suggestion">
+                    <li key={`${s.optionKey}|${s.causeSlug}`} className="flex flex-col gap-2 py-3" data-testid="suggestion" data-key={`${s.nodeKey}|${s.causeSlug}`}>
                       <SuggestionText s={s} />
                       {!editor || s.proposedStrength === s.currentStrength ? null : inDraft ? (
                         <p className="text-sm text-moss">In draft {review.draft?.number}: “{STRENGTH_LABELS[s.proposedStrength]}”. Publish the draft to use it.</p>

@@ -1,4 +1,4 @@
-import { DEFAULT_WEIGHTS, benchPlan, rankNextQuestions, scoreCauses, suggestConclusion, walkPath } from "@/lib/diagnosis";
+import { DEFAULT_WEIGHTS, benchPlan, normaliseWeights, rankNextQuestions, scoreCauses, suggestConclusion, walkPath } from "@/lib/diagnosis";
 import type { DxAnswer, DxOption, DxSettings, DxTree, Strength } from "@/lib/diagnosis";
 import type { StoredRanking } from "@/lib/cases/ranking-types";
 import { finalRankingOf } from "@/lib/cases/ranking-types";
@@ -73,14 +73,12 @@ const UPGRADES: Record<string, string> = {
 
 const DAY = 86_400_000;
 
-/** P(o | cause) over a node's answerable options, as the engine defines it with default weights. */
+/** P(o | cause) over a node's answerable options, the engine's normalisation with default weights. */
 function optionDistribution(options: DxOption[], causeId: string): number[] {
-  const raw = options.map((o) => {
+  return normaliseWeights(options.map((o) => {
     const w = o.evidence[causeId] ?? "neutral";
     return typeof w === "number" ? w : DEFAULT_WEIGHTS[w as Strength];
-  });
-  const total = raw.reduce((a, b) => a + b, 0);
-  return total > 0 ? raw : options.map(() => 1);
+  }));
 }
 
 function rankingFor(tree: DxTree, answers: DxAnswer[], settings: DxSettings): StoredRanking {
