@@ -1,7 +1,8 @@
+import { percent as pct } from "@/lib/format";
 import type { SuggestionView } from "@/lib/review/types";
 import { certaintySentence, proposalSentence, strengthSentence, suggestionSentence } from "@/lib/review/words";
 
-const pct = (x: number) => `${Math.round(x * 100)} %`;
+const width = (x: number) => `${Math.round(x * 100)}%`;
 
 /**
  * One reviewed column: the sentence, then per answer what the shop saw (count and share), what the
@@ -30,8 +31,8 @@ export function SuggestionText({ s, context }: { s: SuggestionView; context?: st
               <td className="px-2 text-right font-mono">{pct(r.authored)}</td>
               <td className="px-2 text-right font-mono">{pct(r.learned)}</td>
               <td className="pl-2" aria-hidden="true">
-                <span className="block h-1.5 rounded bg-paper-deep"><span className="block h-1.5 rounded bg-ink-faint" style={{ width: pct(r.authored).replace(" ", "") }} /></span>
-                <span className="mt-0.5 block h-1.5 rounded bg-paper-deep"><span className="block h-1.5 rounded bg-copper" style={{ width: pct(r.learned).replace(" ", "") }} /></span>
+                <span className="block h-1.5 rounded bg-paper-deep"><span className="block h-1.5 rounded bg-ink-faint" style={{ width: width(r.authored) }} /></span>
+                <span className="mt-0.5 block h-1.5 rounded bg-paper-deep"><span className="block h-1.5 rounded bg-copper" style={{ width: width(r.learned) }} /></span>
               </td>
             </tr>
           ))}

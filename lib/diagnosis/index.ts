@@ -23,6 +23,7 @@ export type {
   CalibrationBin,
   PathWalk,
 } from "./types";
+export { STRENGTHS } from "./types";
 export { DiagnosisError, type DiagnosisErrorCode } from "./errors";
 export { DEFAULT_WEIGHTS, weightTable, type WeightTable } from "./weights";
 export { authoredLikelihoods, normaliseWeights } from "./likelihood";

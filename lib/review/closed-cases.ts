@@ -1,7 +1,7 @@
 import "server-only";
 import { sql as pg } from "@/db";
 import type { ClosedCase, DxSettings } from "@/lib/diagnosis";
-import { DIAGNOSIS_SETTINGS_KEY, parseDiagnosisSettings } from "@/lib/cases/dx-settings";
+import { DIAGNOSIS_SETTINGS_KEY, parseDiagnosisSettings } from "@/lib/triage/dx-settings";
 
 const BATCH = 5000;
 

@@ -1,14 +1,4 @@
-import { normaliseWeights, type Strength, type WeightTable } from "@/lib/diagnosis";
-
-export const STRENGTH_ORDER: readonly Strength[] = ["rules_out", "against", "neutral", "for", "strong"];
-
-export const STRENGTH_LABELS: Record<Strength, string> = {
-  rules_out: "rules out",
-  against: "against",
-  neutral: "neutral",
-  for: "for",
-  strong: "strong",
-};
+import { STRENGTHS as STRENGTH_ORDER, normaliseWeights, type Strength, type WeightTable } from "@/lib/diagnosis";
 
 export interface OptionEvidence {
   key: string;

@@ -1,7 +1,7 @@
-import { STRENGTH_LABELS } from "./strength";
+import { percent as pct, whole } from "@/lib/format";
+import { STRENGTH_LABELS } from "@/lib/trees/kinds";
 import type { SuggestionView } from "./types";
 
-const pct = (x: number) => `${Math.round(x * 100)} %`;
 
 type Said = Pick<SuggestionView, "causeName" | "nodeTitle" | "cases" | "rows" | "optionKey">;
 
@@ -21,7 +21,7 @@ export function suggestionSentence(s: Said): string {
 export function certaintySentence(logBayesFactor: number): string {
   const b = Math.exp(logBayesFactor);
   const grade = b > 150 ? "very strong" : b > 20 ? "strong" : b > 3 ? "positive" : "weak";
-  const times = b >= 1e6 ? "over a million" : Math.round(b).toLocaleString("en-GB");
+  const times = b >= 1e6 ? "over a million" : whole.format(Math.round(b));
   const sure = b >= 1e6 ? "over 99.9999 %" : `${(100 * (b / (1 + b))).toFixed(b > 999 ? 2 : 1)} %`;
   return `These answers are ${times} times likelier if the tree is off here than if it is right: ${grade} evidence (${sure} sure, from even odds).`;
 }

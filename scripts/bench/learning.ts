@@ -1,7 +1,7 @@
 // How much learning from closed cases helps triage, on a seeded simulation: `npm run bench learning`
 // (needs no database or server). For each kind of tree, random trees and a history of past cases
 // drawn from a hidden true table; 500 fresh cases per tree scored with four likelihood tables.
-import { DEFAULT_LEARNING_STRENGTH, learnLikelihoods, scoreCauses, type ClosedCase, type DxSettings } from "../../lib/diagnosis";
+import { DEFAULT_LEARNING_STRENGTH, learnLikelihoods, scoreCauses, type ClosedCase, type DxSettings } from "@/lib/diagnosis";
 import { drawCases, makeWorld, ANSWER_NOISE, DONT_KNOW_RATE, type World, type Wrongness } from "./support/learning-world";
 
 const TREES = Number(process.env.LEARNING_TREES ?? 40);

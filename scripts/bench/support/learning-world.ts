@@ -1,7 +1,7 @@
 // A seeded world for the learning benchmark: random trees, a hidden "true" answer table that
 // matches the tree, differs a little or differs badly, and cases drawn from that table.
-import { normaliseWeights, type ClosedCase, type DxAnswer, type DxOption, type DxTree, type Strength } from "../../../lib/diagnosis";
-import { prng } from "./prng";
+import { normaliseWeights, type ClosedCase, type DxAnswer, type DxOption, type DxTree, type Strength } from "@/lib/diagnosis";
+import { prng } from "@/lib/random";
 
 export type Wrongness = "right" | "a little wrong" | "badly wrong";
 

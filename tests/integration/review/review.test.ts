@@ -4,7 +4,7 @@ import { db } from "@/db";
 import { settings, trees, treeVersions } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import { acceptSuggestionAction, setLikelihoodModeAction } from "@/lib/review/actions";
-import { DIAGNOSIS_SETTINGS_KEY } from "@/lib/cases/dx-settings";
+import { DIAGNOSIS_SETTINGS_KEY } from "@/lib/triage/dx-settings";
 import { learnLikelihoods } from "@/lib/diagnosis";
 import { closedCasesOf } from "@/lib/review/closed-cases";
 import { ENOUGH_HISTORY } from "@/lib/review/in-use";
