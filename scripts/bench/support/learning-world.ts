@@ -1,13 +1,12 @@
 // A seeded world for the learning benchmark: random trees, a hidden "true" answer table that
 // matches the tree, differs a little or differs badly, and cases drawn from that table.
-import { normaliseWeights, type ClosedCase, type DxAnswer, type DxOption, type DxTree, type Strength } from "@/lib/diagnosis";
+import { DEFAULT_WEIGHTS, normaliseWeights, type ClosedCase, type DxAnswer, type DxOption, type DxTree, type Strength } from "@/lib/diagnosis";
 import { prng } from "@/lib/random";
 
 export type Wrongness = "right" | "a little wrong" | "badly wrong";
 
 /** Rules-out is left out on purpose: with answer noise it would make log loss infinite for the authored table. */
 const LADDER: Strength[] = ["against", "neutral", "for", "strong"];
-const WEIGHT: Record<Strength, number> = { rules_out: 0, against: 1 / 3, neutral: 1, for: 3, strong: 9 };
 export const ANSWER_NOISE = 0.06;
 export const DONT_KNOW_RATE = 0.08;
 
@@ -72,7 +71,7 @@ export function makeWorld(seed: number, wrongness: Wrongness): World {
   for (const node of nodes) {
     const outs = options.filter((o) => o.nodeId === node.id && !o.dontKnow);
     for (const c of causes) {
-      const p = normaliseWeights(outs.map((o) => WEIGHT[trueStrength.get(o.id)![c.id] ?? "neutral"]));
+      const p = normaliseWeights(outs.map((o) => DEFAULT_WEIGHTS[trueStrength.get(o.id)![c.id] ?? "neutral"]));
       outs.forEach((o, i) => ((truth[o.id] ??= {})[c.id] = (1 - ANSWER_NOISE) * p[i] + ANSWER_NOISE / outs.length));
     }
   }
