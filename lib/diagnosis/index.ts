@@ -11,6 +11,7 @@ export type {
   CauseScores,
   RankedQuestion,
   Conclusion,
+  Ranking,
   BenchItem,
   BenchPlan,
   TreeProblem,
@@ -31,7 +32,7 @@ export { scoreCauses } from "./score";
 export { entropyBits, expectedInformationGain } from "./information";
 export { rankNextQuestions } from "./next-question";
 export { suggestConclusion } from "./conclusion";
-export { analyseAnswers, type Analysis } from "./analyse";
+export { rankingAfter, RANKING_SUGGESTIONS } from "./ranking";
 export { ModelCache } from "./model";
 export { benchPlan } from "./bench-plan";
 export { validateTree } from "./validate";

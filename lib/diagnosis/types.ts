@@ -81,6 +81,13 @@ export interface Conclusion {
   probability: number;
 }
 
+/** The ranking after a list of answers: what the triage screen shows and each case step stores. */
+export interface Ranking extends CauseScores {
+  /** The best next questions, best first. */
+  suggestions: RankedQuestion[];
+  conclusion: Conclusion;
+}
+
 export interface BenchItem {
   id: string;
   probability: number;

@@ -1,16 +1,11 @@
 import "server-only";
-import { learnLikelihoods, weightTable, type EvidenceColumn, type WeightTable } from "@/lib/diagnosis";
+import { learnLikelihoods, type EvidenceColumn, type WeightTable } from "@/lib/diagnosis";
 import { AppError } from "@/lib/errors";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { TreeGraph } from "@/lib/trees/graph-types";
-import { closedCasesOf, closedStampOf, shopWeights } from "./closed-cases";
+import { closedCasesOf, shopWeights } from "./closed-cases";
 import { proposalFor } from "./strength";
 import type { ColumnRow, SuggestionView, VersionReview } from "./types";
-
-const MAX_CACHED = 64;
-const globalCache = globalThis as unknown as { rootbenchReviews?: Map<number, { stamp: string; review: Promise<VersionReview> }> };
-// Keyed by version; an entry is good while no case of the version has closed (or reopened) and the shop's weights are the same.
-const cache = (globalCache.rootbenchReviews ??= new Map());
 
 function suggestionView(graph: TreeGraph, column: EvidenceColumn, weights: WeightTable): SuggestionView {
   const optionByKey = new Map(graph.options.map((o) => [o.key, o]));
@@ -47,25 +42,9 @@ async function computeReview(versionId: number, weights: WeightTable): Promise<V
 }
 
 /**
- * learnLikelihoods over the closed cases of one tree version, with the shop's strength weights for
- * the authored side and the suggestions in the tree's own words. Cached in memory per version
- * until another case of it closes or reopens, or the shop's weights change.
+ * learnLikelihoods over the closed cases of one tree version as they are now, with the shop's
+ * strength weights for the authored side and the suggestions in the tree's own words.
  */
 export async function reviewVersion(versionId: number): Promise<VersionReview> {
-  const stamp = await closedStampOf(versionId);
-  const weights = weightTable(shopWeights(stamp));
-  const key = `${stamp.closed}|${stamp.latest ?? ""}|${JSON.stringify(weights)}`;
-  const hit = cache.get(versionId);
-  if (hit && hit.stamp === key) return hit.review;
-  const review = computeReview(versionId, weights);
-  cache.delete(versionId);
-  cache.set(versionId, { stamp: key, review });
-  review.catch(() => cache.delete(versionId));
-  while (cache.size > MAX_CACHED) cache.delete(cache.keys().next().value as number);
-  return review;
-}
-
-/** Drops cached reviews (tests, and after an import that adds closed cases). */
-export function forgetReviews(): void {
-  cache.clear();
+  return computeReview(versionId, await shopWeights());
 }

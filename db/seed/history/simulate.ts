@@ -1,4 +1,4 @@
-import { authoredLikelihoods, benchPlan, rankNextQuestions, scoreCauses, suggestConclusion, walkPath } from "@/lib/diagnosis";
+import { authoredLikelihoods, benchPlan, rankingAfter, walkPath } from "@/lib/diagnosis";
 import type { DxAnswer, DxOption, DxSettings, DxTree } from "@/lib/diagnosis";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { finalRankingOf } from "@/lib/triage/ranking-types";
@@ -73,17 +73,6 @@ const UPGRADES: Record<string, string> = {
 
 const DAY = 86_400_000;
 
-function rankingFor(tree: DxTree, answers: DxAnswer[], settings: DxSettings): StoredRanking {
-  const scores = scoreCauses(tree, answers, settings);
-  const suggestions = rankNextQuestions(tree, answers, settings).slice(0, 3);
-  const conclusion = suggestConclusion(tree, answers, settings);
-  return {
-    causes: scores.causes.map((c) => ({ causeId: c.causeId, probability: c.probability, ruledOutBy: c.ruledOutBy })),
-    unlisted: scores.unlisted,
-    suggestions,
-    conclusion,
-  };
-}
 
 /** P(o | cause) the world answers by: option id → cause id → p. */
 type AnswerTable = ReturnType<typeof authoredLikelihoods>;
@@ -107,7 +96,7 @@ function walkAsCaller(rng: Random, authored: DxTree, actual: AnswerTable, trueCa
     // A cause the tree does not list answers every question at random.
     else chosen = answerable[rng.weightedIndex(answerable.map((o) => actual[o.id][trueCause] ?? 1))];
     answers.push({ nodeId: current, optionId: chosen.id });
-    steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingFor(authored, answers, settings) });
+    steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingAfter(authored, answers, settings) });
   }
   return steps;
 }
@@ -180,7 +169,7 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
     const d = drawCase(createdAt);
     const settings: DxSettings = { history: { ...(history.get(d.familySlug) ?? {}) } };
     const steps = walkAsCaller(rng, d.tree.dx, actualBySlug.get(d.tree.slug)!, d.trueCause, scenario, createdAt, settings);
-    const last = steps.at(-1)?.ranking ?? rankingFor(d.tree.dx, [], settings);
+    const last = steps.at(-1)?.ranking ?? rankingAfter(d.tree.dx, [], settings);
     const triagedAt = new Date(createdAt.getTime() + (steps.length + 2) * 45_000);
 
     // Units that come back: the same serial within 90 days of an earlier visit.

@@ -4,7 +4,6 @@ import { cases, caseSteps, causes, outcomeCauses, trees, treeVersions } from "@/
 import { executeAction } from "@/lib/actions/define";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { answerStepAction } from "@/lib/triage/answer";
-import { forgetFamilyHistory } from "@/lib/triage/history";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { undoStepAction } from "@/lib/triage/undo";
 import { likelihoodsFor } from "@/lib/review/learned";
@@ -52,7 +51,6 @@ describe("walking a case through a seeded tree", () => {
       { caseId: closed[0], causeId: belt, primary: false }, { caseId: closed[1], causeId: belt, primary: false },
       { caseId: other, causeId: belt },
     ]);
-    forgetFamilyHistory(); // priors are cached for 30 s per process; this test changed them
   });
 
   let caseId: number;
