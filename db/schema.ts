@@ -181,7 +181,8 @@ export const causeParts = pgTable(
 
 /* ---------- symptom trees ---------- */
 
-export const LIKELIHOOD_MODES = ["authored", "learned"] as const;
+/** "auto": learned once the published version has enough closed cases, else authored; the other two are pinned by a senior. */
+export const LIKELIHOOD_MODES = ["auto", "authored", "learned"] as const;
 export const trees = pgTable(
   "trees",
   {
@@ -190,7 +191,7 @@ export const trees = pgTable(
     symptom: text("symptom").notNull(),
     title: text("title").notNull(),
     description: text("description").notNull().default(""),
-    likelihoodMode: text("likelihood_mode").$type<(typeof LIKELIHOOD_MODES)[number]>().notNull().default("authored"),
+    likelihoodMode: text("likelihood_mode").$type<(typeof LIKELIHOOD_MODES)[number]>().notNull().default("auto"),
     archived: boolean("archived").notNull().default(false),
     createdBy: text("created_by").references(() => users.id),
     createdAt: createdAt(),
