@@ -2,7 +2,8 @@
 # npm run bench [name…]: runs scripts/bench/<name>.ts (all of them by default) against a seeded
 # bench database on the test cluster and a production server on BENCH_PORT (default 3200).
 # Benchmarks that need neither (a simulation such as `learning`) run on their own, with no set-up.
-# Each benchmark prints its own table.
+# Each benchmark prints its own table; compare figures measured side by side in one run. The budgets
+# for what a person feels are checked by `npm run bench perceived`.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/common.sh
