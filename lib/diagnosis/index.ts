@@ -36,3 +36,12 @@ export { validateTree } from "./validate";
 export { learnLikelihoods } from "./learn";
 export { wilsonInterval, rankingScores, topKAccuracy, Z_95 } from "./statistics";
 export { walkPath } from "./path";
+export {
+  teardownPlan,
+  teardownPlanInOrder,
+  type Assembly,
+  type BenchInspection,
+  type TeardownStep,
+  type TeardownPlan,
+} from "./teardown-plan";
+export { companionFigures, type CompanionFigures } from "./companions";
