@@ -46,22 +46,22 @@ function codeOf(fn: () => unknown): string {
   throw new Error("expected a DiagnosisError");
 }
 
-/** A random tree of up to 5 assemblies (each parent drawn among the earlier ones) and up to 7 inspections. */
+/**
+ * A random tree of up to 5 assemblies (each parent drawn among the earlier ones) and up to 7
+ * inspections. Whole numbers scaled down, because fast-check's doubles crowd near 0 and would
+ * make every order cost about the same.
+ */
 const instanceArb = fc
   .record({
-    parents: fc.array(fc.nat(), { minLength: 0, maxLength: 4 }),
-    opens: fc.array(fc.oneof(fc.constant(0), fc.double({ min: 0, max: 40, noNaN: true })), { minLength: 5, maxLength: 5 }),
+    parents: fc.array(fc.nat({ max: 20 }), { minLength: 0, maxLength: 4 }),
+    opens: fc.array(fc.integer({ min: 0, max: 40 }), { minLength: 5, maxLength: 5 }),
     inspections: fc.array(
-      fc.record({
-        weight: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 1, noNaN: true })),
-        minutes: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 30, noNaN: true })),
-        where: fc.nat(),
-      }),
+      fc.record({ weight: fc.integer({ min: 0, max: 100 }), minutes: fc.integer({ min: 0, max: 30 }), where: fc.nat({ max: 20 }) }),
       { minLength: 1, maxLength: 7 },
     ),
-    total: fc.double({ min: 0, max: 1, noNaN: true }),
+    totalPercent: fc.integer({ min: 0, max: 100 }),
   })
-  .map(({ parents, opens, inspections, total }) => {
+  .map(({ parents, opens, inspections, totalPercent }) => {
     const assemblies: Assembly[] = [{ id: "unit", parent: null, openMinutes: opens[0] }];
     parents.forEach((p, i) => assemblies.push({ id: `a${i + 1}`, parent: assemblies[p % assemblies.length].id, openMinutes: opens[i + 1] }));
     const sum = inspections.reduce((s, x) => s + x.weight, 0) || 1;
@@ -69,7 +69,7 @@ const instanceArb = fc
       causeId: `cause-${i}`,
       assemblyId: assemblies[x.where % assemblies.length].id,
       minutes: x.minutes,
-      probability: (x.weight / sum) * total * (1 - 1e-12),
+      probability: (x.weight / sum) * (totalPercent / 100) * (1 - 1e-12),
     }));
     return { assemblies, inspections: list };
   });
@@ -145,7 +145,7 @@ describe("teardown plan", () => {
         expect(new Set(plan.steps.flatMap((s) => s.opens)).size).toBe(plan.steps.flatMap((s) => s.opens).length); // opened once
         expect(plan.steps.reduce((s, step) => s + step.reachProbability * step.minutes, 0)).toBeCloseTo(plan.expectedMinutes, 9);
       }),
-      { numRuns: 120 },
+      { numRuns: 200 },
     );
   });
 
