@@ -4,6 +4,7 @@ import { db, sql } from "@/db";
 import { users } from "@/db/schema";
 import { loadContent } from "@/lib/content/catalogue";
 import { DEMO_ACCOUNTS } from "./accounts";
+import { loadAssemblies, seedAssemblies } from "./assemblies";
 import { seedCatalogue } from "./catalogue";
 import { seedHistory } from "./history";
 import { seedTrees } from "./trees";
@@ -18,10 +19,13 @@ import { seedWriteups } from "./writeups";
 export async function seed(options: { force?: boolean; contentDir?: string; history?: boolean } = {}): Promise<"seeded" | "skipped"> {
   const [{ n }] = await db.select({ n: count() }).from(users);
   if (n > 0 && !options.force) return "skipped";
-  const content = loadContent(options.contentDir ?? path.join(__dirname, "../../content"));
+  const contentDir = options.contentDir ?? path.join(__dirname, "../../content");
+  const content = loadContent(contentDir);
+  const teardown = loadAssemblies(contentDir);
   await db.transaction(async (tx) => {
     await seedUsers(tx);
     const catalogue = await seedCatalogue(tx, content);
+    await seedAssemblies(tx, teardown, catalogue);
     const senior = DEMO_ACCOUNTS.find((a) => a.role === "senior")!;
     const versionOf = await seedTrees(tx, content, catalogue.familyId, senior.id);
     const userOfRole = new Map(DEMO_ACCOUNTS.map((a) => [a.role as string, a.id]));
