@@ -5,6 +5,7 @@ import { users } from "@/db/schema";
 import { loadContent } from "@/lib/content/catalogue";
 import { DEMO_ACCOUNTS } from "./accounts";
 import { loadAssemblies, seedAssemblies } from "./assemblies";
+import { loadBenchDemo, seedCompanions, seedShowcase } from "./bench-demo";
 import { seedCatalogue } from "./catalogue";
 import { seedHistory } from "./history";
 import { seedTrees } from "./trees";
@@ -30,7 +31,12 @@ export async function seed(options: { force?: boolean; contentDir?: string; hist
     const versionOf = await seedTrees(tx, content, catalogue.familyId, senior.id);
     const userOfRole = new Map(DEMO_ACCOUNTS.map((a) => [a.role as string, a.id]));
     await seedWriteups(tx, content, { ...catalogue, userOfRole });
-    if (options.history !== false) await seedHistory(tx, content, { ...catalogue, userOfRole, versionOf });
+    if (options.history !== false) {
+      await seedHistory(tx, content, { ...catalogue, userOfRole, versionOf });
+      const benchDemo = loadBenchDemo(contentDir);
+      await seedCompanions(tx, benchDemo, { ...catalogue, userOfRole, versionOf });
+      await seedShowcase(tx, benchDemo, { ...catalogue, userOfRole, versionOf });
+    }
   });
   return "seeded";
 }

@@ -57,7 +57,9 @@ export function benchProgress(input: BenchInputs): BenchProgress {
   );
   const checklist = plan.steps.map((step) => {
     const c = causeBySlug.get(step.causeId)!;
-    return { cause: c.slug, name: c.name, stage: c.stage, opens: step.opens.map((s) => bySlug.get(s)!), minutes: step.minutes, reachProbability: step.reachProbability };
+    // Stages already open cost nothing more and are not opened again.
+    const opens = step.opens.filter((s) => !open.has(s)).map((s) => bySlug.get(s)!);
+    return { cause: c.slug, name: c.name, stage: c.stage, opens, minutes: step.minutes, reachProbability: step.reachProbability };
   });
 
   const found = input.findings.filter((f) => f.result === "found").map((f) => f.cause);
