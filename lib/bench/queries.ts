@@ -67,7 +67,7 @@ export async function benchCauses(familyId: number, finalRanking: Record<string,
     if (!loc && prior === 0) return [];
     if (!c.active && prior === 0) return [];
     return [{
-      id: c.id, slug: c.slug, name: c.name, stage: loc?.stage ?? rootSlug, inspectMinutes: loc?.inspectMinutes ?? c.inspectMinutes,
+      id: c.id, slug: c.slug, name: c.name, stage: loc?.stage ?? rootSlug, inspectMinutes: loc?.inspectMinutes ?? c.inspectMinutes, catalogueMinutes: c.inspectMinutes,
       labourMinutes: c.labourMinutes, prior, parts: partsOf.get(c.id) ?? [],
     }];
   });

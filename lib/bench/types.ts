@@ -17,6 +17,8 @@ export interface BenchCause {
   /** Where it is inspected in this family's unit, and for how long once that stage is open. */
   stage: string;
   inspectMinutes: number;
+  /** The catalogue's stand-alone inspection minutes, which the phone's bench plan ranks by. */
+  catalogueMinutes: number;
   /** Typical repair minutes, for the labour estimate of a confirmed cause. */
   labourMinutes: number;
   /** Probability at the end of triage (0 when the ranking did not list it). */

@@ -7,7 +7,7 @@ const stages: StageInfo[] = [
   { slug: "shell", name: "Housing", parent: "unit", openMinutes: 20, closeMinutes: 20, caution: "power" },
 ];
 const cause = (slug: string, stage: string, prior: number, over: Partial<BenchCause> = {}): BenchCause => ({
-  id: slug.length, slug, name: slug, stage, inspectMinutes: 10, labourMinutes: 60, prior, parts: [], ...over,
+  id: slug.length, slug, name: slug, stage, inspectMinutes: 10, catalogueMinutes: 15, labourMinutes: 60, prior, parts: [], ...over,
 });
 const inputs = (over: Partial<BenchInputs> = {}): BenchInputs => ({
   stages,
