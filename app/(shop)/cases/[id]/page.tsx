@@ -12,10 +12,10 @@ import { requireRole } from "@/lib/auth/require-role";
 import { benchProgress } from "@/lib/bench/progress";
 import { loadBench } from "@/lib/bench/queries";
 import { may } from "@/lib/auth/roles";
-import { causesBySlug } from "@/lib/cases/catalogue";
+import { causesBySlug } from "@/lib/triage/catalogue";
 import { caseEventRows, caseHeader, caseStepRows } from "@/lib/cases/queries";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { publishedTree } from "@/lib/cases/tree-cache";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { publishedTree } from "@/lib/triage/tree-cache";
 import { caseMail } from "@/lib/mail/outbox";
 
 export const metadata: Metadata = { title: "Case" };
