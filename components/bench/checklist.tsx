@@ -1,5 +1,5 @@
 "use client";
-import { percent } from "@/components/triage/format";
+import { percent } from "@/lib/format";
 import type { FindingResult } from "@/db/schema";
 import type { ChecklistStep } from "@/lib/bench/types";
 import { FindingControls } from "./finding-controls";

@@ -1,4 +1,4 @@
-import { percent } from "@/components/triage/format";
+import { percent } from "@/lib/format";
 import type { CompanionSuggestion } from "@/lib/bench/types";
 
 /** Causes inside the open stages that the shop often confirmed together with the leading one. */

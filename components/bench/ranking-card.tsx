@@ -1,4 +1,4 @@
-import { percent } from "@/components/triage/format";
+import { percent } from "@/lib/format";
 import type { RankedCause } from "@/lib/bench/types";
 
 const RESULT_LABEL = { found: "found", not_found: "not found", not_done: "not done" } as const;

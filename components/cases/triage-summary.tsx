@@ -1,3 +1,4 @@
+import Link from "next/link";
 import type { Case } from "@/db/schema";
 import { money, percent } from "@/lib/format";
 
@@ -31,7 +32,7 @@ export function TriageSummary({ kase, nameOf, teardown }: {
           <>
             <ol className="list-decimal pl-5" data-testid="bench-plan">{plan.order.slice(0, 5).map((slug) => <li key={slug}>{nameOf(slug)}</li>)}</ol>
             <p className="text-ink-soft">Expected teardown about {Math.round(plan.expectedMinutes)} min{teardown ? " (opening each stage once)" : ""}.</p>
-            {teardown ? <a href={teardown.href} className="mt-1 inline-block font-medium">Open the bench checklist</a> : null}
+            {teardown ? <Link href={teardown.href} className="mt-1 inline-block font-medium">Open the bench checklist</Link> : null}
           </>
         ) : <p className="text-ink-soft">None.</p>}
       </div>

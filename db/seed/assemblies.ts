@@ -3,7 +3,7 @@ import path from "node:path";
 import { z } from "zod";
 import type { Tx } from "@/db";
 import { ASSEMBLY_CAUTIONS, assemblies, causeLocations } from "@/db/schema";
-import { slugSchema } from "@/lib/content/tree-file";
+import { slugSchema } from "@/lib/trees/file/schema";
 
 const minutes = z.number().int().min(0).max(600);
 const layoutSchema = z.strictObject({

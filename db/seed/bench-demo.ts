@@ -4,8 +4,8 @@ import { and, eq, sql } from "drizzle-orm";
 import { z } from "zod";
 import type { Tx } from "@/db";
 import { caseEvents, cases, causeLocations, outcomeCauses, RIDING_USES, CALLER_KINDS } from "@/db/schema";
-import { slugSchema } from "@/lib/content/tree-file";
-import { Random } from "./history/random";
+import { slugSchema } from "@/lib/trees/file/schema";
+import { Random } from "@/lib/random";
 
 const benchDemoSchema = z.strictObject({
   format: z.literal("rootbench-bench-demo"),

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { saveOutcome } from "@/app/(shop)/reports/_actions/outcomes/actions";
+import { saveOutcome } from "@/app/(shop)/cases/[id]/actions";
 import { BenchScreen } from "@/components/bench/bench-screen";
 import { OutcomeForm } from "@/components/outcomes/outcome-form";
 import { StatusBadge } from "@/components/cases/status-badge";
