@@ -29,7 +29,7 @@ export function AssemblyForm({ family, stage, stages, save, remove }: {
   const parents = [{ value: "", label: "None: the unit as received" }, ...stages.filter((s) => s.slug !== stage?.slug).map((s) => ({ value: s.slug, label: s.name }))];
   return (
     <div className="flex flex-col gap-2" data-testid="assembly-form" data-stage={stage?.slug ?? "new"}>
-      <form action={action} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[2fr_1fr_2fr_repeat(2,minmax(0,7rem))_1.5fr_auto] lg:items-end">
+      <form action={action} className="grid gap-3 sm:grid-cols-3 sm:items-end [&_input]:min-w-0 [&_select]:min-w-0">
         <input type="hidden" name="family" value={family} />
         <input type="hidden" name="originalSlug" value={stage?.slug ?? ""} />
         <Field label="Name" name="name" defaultValue={stage?.name ?? ""} error={errors.name} required />
@@ -38,7 +38,7 @@ export function AssemblyForm({ family, stage, stages, save, remove }: {
         <Field label="Open (min)" name="openMinutes" inputMode="numeric" defaultValue={String(stage?.openMinutes ?? 10)} error={errors.openMinutes} />
         <Field label="Close (min)" name="closeMinutes" inputMode="numeric" defaultValue={String(stage?.closeMinutes ?? 10)} error={errors.closeMinutes} />
         <SelectField label="Caution" name="caution" defaultValue={stage?.caution ?? "none"} options={CAUTIONS} error={errors.caution} />
-        <SubmitButton pendingText="Saving…">{stage ? "Save" : "Add stage"}</SubmitButton>
+        <div className="sm:col-span-3"><SubmitButton pendingText="Saving…">{stage ? "Save" : "Add stage"}</SubmitButton></div>
       </form>
       <div className="flex flex-wrap items-center gap-3">
         <FormMessage state={state} />

@@ -42,7 +42,7 @@ export default async function FamilyStagesPage({ params }: { params: Promise<{ s
         <ol className="flex flex-col gap-4">
           {stages.map((s) => (
             <li key={s.slug} style={{ marginLeft: `${depthOf(s.slug, parentOf) * 1.25}rem` }} className="border-l-2 border-ink-faint/30 pl-3" data-testid="stage" data-stage={s.slug}>
-              {canEdit ? <AssemblyForm family={family.slug} stage={s} stages={stages} save={saveAssembly} remove={deleteAssembly} /> : (
+              {canEdit ? <AssemblyForm family={family.slug} stage={s} stages={stages} save={saveAssembly} remove={s.parent === null ? undefined : deleteAssembly} /> : (
                 <p className="text-sm"><span className="font-medium">{s.name}</span> · open {s.openMinutes} min, close {s.closeMinutes} min
                   {s.caution !== "none" ? <span className="ml-2 rounded bg-amber-light px-1.5 text-xs">{STAGE_CAUTION[s.caution].title}</span> : null}</p>
               )}
