@@ -1,5 +1,5 @@
 import type { StoredRanking } from "@/lib/triage/ranking-types";
-import { unlistedLeads } from "@/lib/triage/ranking";
+import { unlistedLeads } from "@/lib/triage/ranking-types";
 import { percent } from "@/lib/format";
 
 /** The stop rule's advice: keep asking, enough to conclude, or none of the listed causes fits. */

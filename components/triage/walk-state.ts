@@ -1,6 +1,5 @@
-import { computeRanking } from "@/lib/triage/ranking";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
-import { ModelCache, type DxSettings, type DxTree } from "@/lib/diagnosis";
+import { ModelCache, rankingAfter, type DxSettings, type DxTree } from "@/lib/diagnosis";
 import type { WalkStep } from "@/lib/triage/walk-types";
 
 export interface WalkState {
@@ -27,7 +26,7 @@ export function optimisticWalk(tree: DxTree, settings: DxSettings) {
     const answers = [...state.steps, change].map((s) => ({ nodeId: s.nodeKey, optionId: s.optionKey }));
     let ranking: StoredRanking;
     try {
-      ranking = computeRanking(tree, answers, settings, models);
+      ranking = rankingAfter(tree, answers, settings, models);
     } catch {
       ranking = currentRanking(state);
     }

@@ -1,9 +1,10 @@
 import { z } from "zod";
 import { authorize, type Access } from "@/lib/auth/authorize";
-import type { CallerCheck } from "@/lib/auth/caller-check";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, isAppError } from "@/lib/errors";
 import { formDataToObject, echoFields } from "./form-data";
+import { logFailure } from "@/lib/log/failure";
+import { CONTROL_CHARACTER_MESSAGE, fieldWithControlCharacter } from "@/lib/http/control-characters";
 
 export type ActionFailure = {
   ok: false;
@@ -27,20 +28,6 @@ export interface ActionSpec<S extends z.ZodType, R> {
   access: Access;
   input: S;
   run: (input: z.output<S>, ctx: ActionContext) => Promise<R | ActionSuccess<R>>;
-  /**
-   * Optional: the same work in one database round trip, for a hot action whose one write can
-   * check the caller itself (`callerRow`), instead of a session query first. Gets input that has
-   * already passed `input`. Returns null whenever it did not complete for any reason (no such
-   * session, a role not allowed, bad input, a conflict): nothing is written then, and the
-   * ordinary path (session, role, validation, run) answers with its result or its error.
-   */
-  inOneTrip?: (input: z.output<S>, caller: CallerCheck) => Promise<OneTripDone<R> | null>;
-}
-
-export interface OneTripDone<R> {
-  value: R;
-  /** When the caller's session expires, as the write statement saw it. */
-  sessionExpiresAt: Date;
 }
 
 export function defineAction<S extends z.ZodType, R>(spec: ActionSpec<S, R>): ActionSpec<S, R> {
@@ -70,7 +57,12 @@ export async function executeAction<S extends z.ZodType, R>(
   if (verdict === 401) return { ok: false, status: 401, error: "Please sign in again." };
   if (verdict === 403) return { ok: false, status: 403, error: "Your role may not do this." };
 
-  const parsed = spec.input.safeParse(raw instanceof FormData ? formDataToObject(raw) : raw);
+  const plain = raw instanceof FormData ? formDataToObject(raw) : raw;
+  const controlled = fieldWithControlCharacter(plain);
+  if (controlled) {
+    return { ok: false, status: 400, error: CONTROL_CHARACTER_MESSAGE, fieldErrors: { [controlled]: CONTROL_CHARACTER_MESSAGE }, fields };
+  }
+  const parsed = spec.input.safeParse(plain);
   if (!parsed.success) {
     const fieldErrors = fieldErrorsOf(parsed.error);
     return { ok: false, status: 400, error: "Please correct the highlighted fields.", fieldErrors, fields };
@@ -85,7 +77,7 @@ export async function executeAction<S extends z.ZodType, R>(
       return { ok: false, status: error.status, error: error.message, fieldErrors: error.fieldErrors, fields };
     }
     if (isNextControlFlow(error)) throw error;
-    console.error(`action ${spec.name} failed`, error);
+    logFailure(`action ${spec.name} failed`, error);
     return { ok: false, status: 500, error: "Something went wrong on the server; nothing was saved.", fields };
   }
 }

@@ -6,10 +6,9 @@ import { defineAction } from "@/lib/actions/define";
 import { walkPath } from "@/lib/diagnosis";
 import { AppError } from "@/lib/errors";
 import { enqueueMail } from "@/lib/mail/outbox";
-import { answersOf, assertOpen, rankingFor } from "./answer";
+import { answersOf, assertOpen, caseRanking } from "./answer";
 import { causesBySlug } from "./catalogue";
 import { loadCaseContext } from "./context";
-import { forgetCase } from "./context-cache";
 import { finishInput, type FinishInput } from "./inputs";
 import { benchPlanFor, roughQuote } from "./quote";
 import { finalRankingOf, type StoredRanking } from "./ranking-types";
@@ -33,6 +32,7 @@ const LIKELY_MIN = 0.05;
  * Ends the triage: stores the final ranking (the one shown after the last answer), quote,
  * bench plan and what to send, moves the case to advised or booked in, and queues the summary
  * e-mail to the caller in the same transaction, so the message exists exactly when the change does.
+ * Lock order, as for an answer and an undo: the case row first.
  */
 export async function finishCase(input: FinishInput, userId: string): Promise<FinishedCase> {
   const ctx = await loadCaseContext(input.caseId);
@@ -50,7 +50,7 @@ export async function finishCase(input: FinishInput, userId: string): Promise<Fi
     if ((last?.id ?? null) !== (ctx.steps.at(-1)?.id ?? null)) {
       throw new AppError("conflict", "An answer changed while you were finishing; check the ranking and finish again.");
     }
-    const ranking: StoredRanking = last ? (last.ranking as StoredRanking) : rankingFor(tree, answers, ctx);
+    const ranking: StoredRanking = last ? (last.ranking as StoredRanking) : caseRanking(tree, answers, ctx);
     const catalogue = await causesBySlug(ranking.causes.map((c) => c.causeId), tx);
     const [family] = await tx.select({ name: motorFamilies.name, generation: motorFamilies.generation }).from(motorFamilies)
       .where(eq(motorFamilies.id, row.familyId)).limit(1);
@@ -93,7 +93,6 @@ export async function finishCase(input: FinishInput, userId: string): Promise<Fi
     }
     return { id: row.id, status: input.outcome, mailQueued };
   });
-  forgetCase(ctx.id);
   return finished;
 }
 

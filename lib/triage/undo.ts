@@ -4,9 +4,8 @@ import { db } from "@/db";
 import { cases, caseSteps } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
-import { anticipateForCase, answersOf, assertOpen, rankingFor } from "./answer";
+import { answersOf, assertOpen, caseRanking } from "./answer";
 import { loadCaseContext } from "./context";
-import { rememberUndone } from "./context-cache";
 import { undoInput } from "./inputs";
 import type { StoredRanking } from "./ranking-types";
 import { publishedTree } from "./tree-cache";
@@ -17,7 +16,10 @@ export interface UndoneStep {
   ranking: StoredRanking;
 }
 
-/** Removes exactly the last step, and only if it is the one the caller saw as last. */
+/**
+ * Removes exactly the last step, and only if it is the one the caller saw as last. Lock order, as
+ * for an answer and the finish: the case row first, then its steps.
+ */
 export async function undoLastStep(caseId: number, seq: number): Promise<UndoneStep> {
   const previous = await db.transaction(async (tx) => {
     const [row] = await tx.select({ reference: cases.reference, status: cases.status }).from(cases).where(eq(cases.id, caseId)).for("update");
@@ -30,12 +32,9 @@ export async function undoLastStep(caseId: number, seq: number): Promise<UndoneS
     if (last.seq !== seq) throw new AppError("conflict", `Answer ${seq} is not the last one any more (the last is ${last.seq}); reload the case.`);
     await tx.delete(caseSteps).where(and(eq(caseSteps.id, last.id), eq(caseSteps.caseId, caseId)));
     await tx.update(cases).set({ updatedAt: new Date() }).where(eq(cases.id, caseId));
-    return { removedId: last.id, ranking: before ? (before.ranking as StoredRanking) : null };
+    return { ranking: before ? (before.ranking as StoredRanking) : null };
   });
-  rememberUndone(caseId, previous.removedId);
-  const ranking = previous.ranking ?? (await startingRanking(caseId));
-  anticipateForCase(caseId, ranking).catch(() => {});
-  return { removedSeq: seq, ranking };
+  return { removedSeq: seq, ranking: previous.ranking ?? (await startingRanking(caseId)) };
 }
 
 /** The ranking before any answer: priors only, from the shop's history for the motor family. */
@@ -43,7 +42,7 @@ export async function startingRanking(caseId: number): Promise<StoredRanking> {
   const ctx = await loadCaseContext(caseId);
   if (!ctx) throw new AppError("not_found", "That case does not exist.");
   const tree = await publishedTree(ctx.treeVersionId);
-  return rankingFor(tree, answersOf(tree, []), ctx);
+  return caseRanking(tree, answersOf(tree, []), ctx);
 }
 
 export const undoStepAction = defineAction({

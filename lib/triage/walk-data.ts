@@ -1,7 +1,6 @@
 import "server-only";
 import type { WalkProps } from "./walk-types";
-import { answersOf, rankingFor } from "./answer";
-import { anticipate } from "./anticipated-rankings";
+import { answersOf, caseRanking } from "./answer";
 import { causesBySlug } from "./catalogue";
 import { loadCaseContext } from "./context";
 import { caseHeader, caseStepRows } from "@/lib/cases/queries";
@@ -18,9 +17,7 @@ export async function loadWalk(caseId: number): Promise<{ status: string; props:
     nodeKey: tree.nodeById.get(s.nodeId)?.key ?? "", optionKey: tree.optionById.get(s.optionId)?.key ?? "",
   });
   const steps = stepRows.map((s) => ({ id: s.id, seq: s.seq, ...keyOf(s), ranking: s.ranking as StoredRanking }));
-  const startRanking = rankingFor(tree, answersOf(tree, []), ctx);
-  // The technician answers next: have the likely answers' rankings ready by then.
-  if (ctx.status === "open") void anticipate(tree, answersOf(tree, ctx.steps), ctx.settings, steps.at(-1)?.ranking ?? startRanking);
+  const startRanking = caseRanking(tree, answersOf(tree, []), ctx);
   return {
     status: header.status,
     props: {

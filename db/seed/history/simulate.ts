@@ -1,5 +1,5 @@
-import { DEFAULT_WEIGHTS, benchPlan, rankNextQuestions, scoreCauses, suggestConclusion, walkPath } from "@/lib/diagnosis";
-import type { DxAnswer, DxOption, DxSettings, DxTree, Strength } from "@/lib/diagnosis";
+import { authoredLikelihoods, benchPlan, rankingAfter, walkPath } from "@/lib/diagnosis";
+import type { DxAnswer, DxOption, DxSettings, DxTree } from "@/lib/diagnosis";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { finalRankingOf } from "@/lib/triage/ranking-types";
 import type { Cause, Scenario } from "@/db/seed/content";
@@ -73,34 +73,16 @@ const UPGRADES: Record<string, string> = {
 
 const DAY = 86_400_000;
 
-/** P(o | cause) over a node's answerable options, as the engine defines it with default weights. */
-function optionDistribution(options: DxOption[], causeId: string): number[] {
-  const raw = options.map((o) => {
-    const w = o.evidence[causeId] ?? "neutral";
-    return typeof w === "number" ? w : DEFAULT_WEIGHTS[w as Strength];
-  });
-  const total = raw.reduce((a, b) => a + b, 0);
-  return total > 0 ? raw : options.map(() => 1);
-}
 
-function rankingFor(tree: DxTree, answers: DxAnswer[], settings: DxSettings): StoredRanking {
-  const scores = scoreCauses(tree, answers, settings);
-  const suggestions = rankNextQuestions(tree, answers, settings).slice(0, 3);
-  const conclusion = suggestConclusion(tree, answers, settings);
-  return {
-    causes: scores.causes.map((c) => ({ causeId: c.causeId, probability: c.probability, ruledOutBy: c.ruledOutBy })),
-    unlisted: scores.unlisted,
-    suggestions,
-    conclusion,
-  };
-}
+/** P(o | cause) the world answers by: option id → cause id → p. */
+type AnswerTable = ReturnType<typeof authoredLikelihoods>;
 
 /** Walks the tree's default path as a caller whose unit has `trueCause` would answer. */
-function walkAsCaller(rng: Random, authored: DxTree, actual: DxTree, trueCause: string, scenario: Scenario, start: Date, settings: DxSettings, maxSteps = 40) {
+function walkAsCaller(rng: Random, authored: DxTree, actual: AnswerTable, trueCause: string, scenario: Scenario, start: Date, settings: DxSettings, maxSteps = 40) {
   const answers: DxAnswer[] = [];
   const steps: SimStep[] = [];
   const optionsOf = new Map<string, DxOption[]>();
-  for (const o of actual.options) optionsOf.set(o.nodeId, [...(optionsOf.get(o.nodeId) ?? []), o]);
+  for (const o of authored.options) optionsOf.set(o.nodeId, [...(optionsOf.get(o.nodeId) ?? []), o]);
   for (let i = 0; i < maxSteps; i++) {
     const current = walkPath(authored, answers).current;
     if (!current) break;
@@ -111,9 +93,10 @@ function walkAsCaller(rng: Random, authored: DxTree, actual: DxTree, trueCause: 
     let chosen: DxOption;
     if (dontKnow && rng.chance(scenario.dontKnowRate)) chosen = dontKnow;
     else if (rng.chance(scenario.answerNoise)) chosen = rng.pick(answerable);
-    else chosen = answerable[rng.weightedIndex(optionDistribution(answerable, trueCause))];
+    // A cause the tree does not list answers every question at random.
+    else chosen = answerable[rng.weightedIndex(answerable.map((o) => actual[o.id][trueCause] ?? 1))];
     answers.push({ nodeId: current, optionId: chosen.id });
-    steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingFor(authored, answers, settings) });
+    steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingAfter(authored, answers, settings) });
   }
   return steps;
 }
@@ -142,7 +125,7 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
   const { scenario, causes, trees, anchor } = input;
   const rng = new Random(scenario.seed);
   const causeBySlug = new Map(causes.map((c) => [c.slug, c]));
-  const actualBySlug = new Map(trees.map((t) => [t.slug, actualTree(t, scenario)]));
+  const actualBySlug = new Map(trees.map((t) => [t.slug, authoredLikelihoods(actualTree(t, scenario))]));
   const families = Object.entries(scenario.families);
   const start = new Date(anchor.getTime() - scenario.months * 30.44 * DAY);
 
@@ -186,7 +169,7 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
     const d = drawCase(createdAt);
     const settings: DxSettings = { history: { ...(history.get(d.familySlug) ?? {}) } };
     const steps = walkAsCaller(rng, d.tree.dx, actualBySlug.get(d.tree.slug)!, d.trueCause, scenario, createdAt, settings);
-    const last = steps.at(-1)?.ranking ?? rankingFor(d.tree.dx, [], settings);
+    const last = steps.at(-1)?.ranking ?? rankingAfter(d.tree.dx, [], settings);
     const triagedAt = new Date(createdAt.getTime() + (steps.length + 2) * 45_000);
 
     // Units that come back: the same serial within 90 days of an earlier visit.

@@ -4,10 +4,9 @@ import { cases, caseSteps, causes, outcomeCauses, trees, treeVersions } from "@/
 import { executeAction } from "@/lib/actions/define";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { answerStepAction } from "@/lib/triage/answer";
-import { forgetFamilyHistory } from "@/lib/triage/history";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { undoStepAction } from "@/lib/triage/undo";
-import { learnedLikelihoodsFor } from "@/lib/review/learned";
+import { likelihoodsFor } from "@/lib/review/learned";
 import { rankNextQuestions, scoreCauses, suggestConclusion, type DxAnswer } from "@/lib/diagnosis";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import { countRows, createUser, db } from "../../support/db";
@@ -52,7 +51,6 @@ describe("walking a case through a seeded tree", () => {
       { caseId: closed[0], causeId: belt, primary: false }, { caseId: closed[1], causeId: belt, primary: false },
       { caseId: other, causeId: belt },
     ]);
-    forgetFamilyHistory(); // priors are cached for 30 s per process; this test changed them
   });
 
   let caseId: number;
@@ -111,11 +109,11 @@ describe("walking a case through a seeded tree", () => {
     try {
       const answers = await walk(2);
       const dx = toDxTree((await loadGraph(versionId))!);
-      const likelihoods = await learnedLikelihoodsFor(versionId);
+      const likelihoods = await likelihoodsFor(versionId, "learned");
       const last = (await stepsOf(caseId)).at(-1)!.ranking as StoredRanking;
       expect(last.causes).toEqual(scoreCauses(dx, answers, { history, likelihoods }).causes);
     } finally {
-      await db.update(trees).set({ likelihoodMode: "authored" }).where(eq(trees.id, version.treeId));
+      await db.update(trees).set({ likelihoodMode: "auto" }).where(eq(trees.id, version.treeId));
     }
   });
 
