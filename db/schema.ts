@@ -1,5 +1,6 @@
 import { relations, sql } from "drizzle-orm";
 import {
+  type AnyPgColumn,
   boolean,
   check,
   index,
@@ -651,3 +652,73 @@ export const writeupPartsRelations = relations(writeupParts, ({ one }) => ({
   writeup: one(writeups, { fields: [writeupParts.writeupId], references: [writeups.id] }),
   part: one(parts, { fields: [writeupParts.partId], references: [parts.id] }),
 }));
+
+/* ---------- bench teardown: assemblies of a motor family, where each cause is inspected, findings ---------- */
+
+/** The standing caution a stage needs: battery out and power off, or the press. */
+export const ASSEMBLY_CAUTIONS = ["none", "power", "press"] as const;
+export type AssemblyCaution = (typeof ASSEMBLY_CAUTIONS)[number];
+
+export const assemblies = pgTable(
+  "assemblies",
+  {
+    id: serial("id").primaryKey(),
+    familyId: integer("family_id").notNull().references(() => motorFamilies.id, { onDelete: "cascade" }),
+    slug: text("slug").notNull(),
+    name: text("name").notNull(),
+    /** Null for the unit as it arrives, the one root of the family's tree of assemblies. */
+    parentId: integer("parent_id").references((): AnyPgColumn => assemblies.id),
+    openMinutes: integer("open_minutes").notNull().default(0),
+    closeMinutes: integer("close_minutes").notNull().default(0),
+    caution: text("caution").$type<AssemblyCaution>().notNull().default("none"),
+    position: integer("position").notNull().default(0),
+  },
+  (t) => [
+    uniqueIndex("assemblies_family_slug_key").on(t.familyId, t.slug),
+    index("assemblies_parent_idx").on(t.parentId),
+    check("assemblies_minutes_check", sql`${t.openMinutes} >= 0 and ${t.closeMinutes} >= 0`),
+    check("assemblies_caution_check", sql`${t.caution} in (${inList(ASSEMBLY_CAUTIONS)})`),
+  ],
+);
+export type AssemblyRow = typeof assemblies.$inferSelect;
+
+/** Where a cause is inspected in a family's unit, and how long the inspection takes once that assembly is open. */
+export const causeLocations = pgTable(
+  "cause_locations",
+  {
+    familyId: integer("family_id").notNull().references(() => motorFamilies.id, { onDelete: "cascade" }),
+    causeId: integer("cause_id").notNull().references(() => causes.id, { onDelete: "cascade" }),
+    assemblyId: integer("assembly_id").notNull().references(() => assemblies.id, { onDelete: "cascade" }),
+    inspectMinutes: integer("inspect_minutes").notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.familyId, t.causeId] }),
+    index("cause_locations_cause_idx").on(t.causeId),
+    index("cause_locations_assembly_idx").on(t.assemblyId),
+    check("cause_locations_minutes_check", sql`${t.inspectMinutes} >= 0`),
+  ],
+);
+
+export const FINDING_RESULTS = ["found", "not_found", "not_done"] as const;
+export type FindingResult = (typeof FINDING_RESULTS)[number];
+
+/** One inspection at the bench: the latest result recorded for a cause on a case. */
+export const benchFindings = pgTable(
+  "bench_findings",
+  {
+    caseId: integer("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
+    causeId: integer("cause_id").notNull().references(() => causes.id),
+    result: text("result").$type<FindingResult>().notNull(),
+    photoId: text("photo_id").references(() => uploads.id, { onDelete: "set null" }),
+    note: text("note").notNull().default(""),
+    recordedBy: text("recorded_by").references(() => users.id),
+    recordedAt: ts("recorded_at").notNull().defaultNow(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.caseId, t.causeId] }),
+    index("bench_findings_cause_idx").on(t.causeId),
+    index("bench_findings_photo_idx").on(t.photoId),
+    check("bench_findings_result_check", sql`${t.result} in (${inList(FINDING_RESULTS)})`),
+  ],
+);
+export type BenchFinding = typeof benchFindings.$inferSelect;

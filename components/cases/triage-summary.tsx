@@ -1,9 +1,16 @@
+import Link from "next/link";
 import type { Case } from "@/db/schema";
 import { money, percent } from "@/lib/format";
 
 
 /** What the triage ended with: the final ranking, the quote, the bench plan and what was asked for. */
-export function TriageSummary({ kase, nameOf }: { kase: Case; nameOf: (slug: string) => string }) {
+export function TriageSummary({ kase, nameOf, teardown }: {
+  kase: Case;
+  nameOf: (slug: string) => string;
+  /** For a unit in the shop: the teardown plan through its assemblies, which replaces the phone's bench plan. */
+  teardown?: { order: string[]; expectedMinutes: number; href: string } | null;
+}) {
+  const plan = teardown ?? kase.benchPlan;
   const ranking = Object.entries(kase.finalRanking ?? {}).filter(([k]) => k !== "unlisted").sort((a, b) => b[1] - a[1]).slice(0, 4);
   return (
     <div className="grid gap-4 text-sm md:grid-cols-3" data-testid="triage-summary">
@@ -21,10 +28,11 @@ export function TriageSummary({ kase, nameOf }: { kase: Case; nameOf: (slug: str
       </div>
       <div>
         <p className="font-medium">Bench plan</p>
-        {kase.benchPlan ? (
+        {plan ? (
           <>
-            <ol className="list-decimal pl-5">{kase.benchPlan.order.slice(0, 5).map((slug) => <li key={slug}>{nameOf(slug)}</li>)}</ol>
-            <p className="text-ink-soft">Expected teardown about {Math.round(kase.benchPlan.expectedMinutes)} min.</p>
+            <ol className="list-decimal pl-5" data-testid="bench-plan">{plan.order.slice(0, 5).map((slug) => <li key={slug}>{nameOf(slug)}</li>)}</ol>
+            <p className="text-ink-soft">Expected teardown about {Math.round(plan.expectedMinutes)} min{teardown ? " (opening each stage once)" : ""}.</p>
+            {teardown ? <Link href={teardown.href} className="mt-1 inline-block font-medium">Open the bench checklist</Link> : null}
           </>
         ) : <p className="text-ink-soft">None.</p>}
       </div>

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import type { FamilyRow } from "@/lib/catalogue/queries";
 
 export function FamilyList({ families, makers }: { families: FamilyRow[]; makers: { slug: string; name: string; blurb: string }[] }) {
@@ -13,6 +14,7 @@ export function FamilyList({ families, makers }: { families: FamilyRow[]; makers
               {list.map((f) => (
                 <li key={f.slug} className="text-sm">
                   <span className="font-medium">{f.name} {f.generation}</span> <span className="text-xs text-ink-faint">{f.years}</span>
+                  {" "}<Link href={`/catalogue/families/${f.slug}`} className="text-xs">stages</Link>
                   {f.notes ? <p className="text-xs text-ink-soft">{f.notes}</p> : null}
                 </li>
               ))}

@@ -5,6 +5,8 @@ import { users } from "@/db/schema";
 import { isDemoMode } from "@/lib/auth/demo-mode";
 import { loadContent } from "@/db/seed/content";
 import { DEMO_ACCOUNTS } from "./accounts";
+import { loadAssemblies, seedAssemblies } from "./assemblies";
+import { loadBenchDemo, seedCompanions, seedShowcase } from "./bench-demo";
 import { seedCatalogue } from "./catalogue";
 import { seedHistory } from "./history";
 import { seedTrees } from "./trees";
@@ -24,15 +26,23 @@ export async function seed(options: { force?: boolean; contentDir?: string; hist
   if (real > 0) return "skipped";
   const [{ n }] = await db.select({ n: count() }).from(users);
   if (n > 0 && !options.force) return "skipped";
-  const content = loadContent(options.contentDir ?? path.join(__dirname, "../../content"));
+  const contentDir = options.contentDir ?? path.join(__dirname, "../../content");
+  const content = loadContent(contentDir);
+  const teardown = loadAssemblies(contentDir);
   await db.transaction(async (tx) => {
     await seedUsers(tx);
     const catalogue = await seedCatalogue(tx, content);
+    await seedAssemblies(tx, teardown, catalogue);
     const senior = DEMO_ACCOUNTS.find((a) => a.role === "senior")!;
     const versionOf = await seedTrees(tx, content, catalogue.familyId, senior.id);
     const userOfRole = new Map(DEMO_ACCOUNTS.map((a) => [a.role as string, a.id]));
     await seedWriteups(tx, content, { ...catalogue, userOfRole });
-    if (options.history !== false) await seedHistory(tx, content, { ...catalogue, userOfRole, versionOf });
+    if (options.history !== false) {
+      await seedHistory(tx, content, { ...catalogue, userOfRole, versionOf });
+      const benchDemo = loadBenchDemo(contentDir);
+      await seedCompanions(tx, benchDemo, { ...catalogue, userOfRole, versionOf });
+      await seedShowcase(tx, benchDemo, { ...catalogue, userOfRole, versionOf });
+    }
   });
   return "seeded";
 }

@@ -12,6 +12,7 @@ export const CAPABILITIES = {
   "case:read": STAFF,
   "case:work": WORKERS,
   "case:reopen": EDITORS,
+  "bench:record": WORKERS,
   "tree:read": ALL_ROLES,
   "tree:edit": EDITORS,
   "catalogue:read": ALL_ROLES,

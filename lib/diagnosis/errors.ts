@@ -10,6 +10,9 @@ export type DiagnosisErrorCode =
   | "unknown_option"
   | "option_node_mismatch"
   | "no_root"
+  | "several_roots"
+  | "unknown_assembly"
+  | "cycle"
   | "no_hypotheses"
   | "all_ruled_out"
   | "empty_input";

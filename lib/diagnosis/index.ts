@@ -42,3 +42,12 @@ export { wilsonInterval, rankingScores, topKAccuracy, Z_95 } from "./statistics"
 export { walkPath } from "./path";
 export { kaplanMeier, logRank, type SurvivalObservation, type KaplanMeierStep } from "./survival";
 export { kaplanMeierOfTally, logRankOfTally, tallyObservations, type SurvivalTally } from "./survival";
+export {
+  teardownPlan,
+  teardownPlanInOrder,
+  type Assembly,
+  type BenchInspection,
+  type TeardownStep,
+  type TeardownPlan,
+} from "./teardown-plan";
+export { companionFigures, type CompanionFigures } from "./companions";
