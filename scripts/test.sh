@@ -12,7 +12,7 @@ ensure_chromium
 
 export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-54339}
 bash scripts/db.sh start
-for name in rootbench_test rootbench_e2e; do
+for name in rootbench_test rootbench_e2e rootbench_fresh; do
   bash scripts/db.sh drop-db "$name" >/dev/null
   bash scripts/db.sh create-db "$name" >/dev/null
 done
@@ -50,9 +50,20 @@ fi
 NODE_ENV=production DATABASE_URL=$E2E_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT \
   node node_modules/next/dist/bin/next start -p "$E2E_PORT" -H 127.0.0.1 >"$results/server.log" 2>&1 & pids+=($!)
 wait_for_http "http://127.0.0.1:$E2E_PORT/api/health" 90 || { tail -n 40 "$results/server.log"; exit 1; }
-E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" DATABASE_URL=$E2E_DATABASE_URL E2E_SMTP_CONTROL="http://127.0.0.1:$((E2E_SMTP_PORT + 1))" \
+
+# A second server: a shop of its own (ROOTBENCH_DEMO=0) on an empty database, for the first-run test.
+E2E_FRESH_PORT=${E2E_FRESH_PORT:-$((E2E_PORT + 50))}
+FRESH_DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_fresh)
+DATABASE_URL=$FRESH_DATABASE_URL npx tsx --conditions=react-server db/migrate.ts >/dev/null
+DATABASE_URL=$FRESH_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT MAIL_POLL_MS=300 MAIL_FROM="Rootbench <shop@fresh-shop.rootbench.test>" \
+  npx tsx --conditions=react-server scripts/mail/worker.ts >"$results/fresh-mail-worker.log" 2>&1 & pids+=($!)
+NODE_ENV=production ROOTBENCH_DEMO=0 DATABASE_URL=$FRESH_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT APP_URL="http://127.0.0.1:$E2E_FRESH_PORT" \
+  node node_modules/next/dist/bin/next start -p "$E2E_FRESH_PORT" -H 127.0.0.1 >"$results/fresh-server.log" 2>&1 & pids+=($!)
+wait_for_http "http://127.0.0.1:$E2E_FRESH_PORT/api/health" 90 || { tail -n 40 "$results/fresh-server.log"; exit 1; }
+
+E2E_FRESH_BASE_URL="http://127.0.0.1:$E2E_FRESH_PORT" E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" DATABASE_URL=$E2E_DATABASE_URL E2E_SMTP_CONTROL="http://127.0.0.1:$((E2E_SMTP_PORT + 1))" \
   npx vitest run --config tests/e2e/vitest.config.ts \
-  --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || { tail -n 40 "$results/server.log"; exit 1; }
+  --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || { tail -n 40 "$results/server.log" "$results/fresh-server.log"; exit 1; }
 
 node -e '
   const fs = require("fs"); let p = 0, f = 0, s = 0;

@@ -24,6 +24,8 @@ export const CAPABILITIES = {
   "reports:export": ["admin", "lead"],
   "reports:import": ["admin", "lead"],
   "users:manage": ["admin", "lead"],
+  "users:force-reset": ["admin"],
+  "account:edit": ALL_ROLES,
   "outbox:read": ["admin", "lead"],
   "settings:edit": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
