@@ -9,7 +9,7 @@ import {
 } from "@/lib/diagnosis";
 import { answer, workshopTree } from "./fixtures";
 
-// Issue 3: invalid input throws a typed error with a clear message; it never returns NaN.
+// Invalid input throws a typed error with a clear message; it never returns NaN.
 function codeOf(fn: () => unknown): string {
   try {
     fn();
