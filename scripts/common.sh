@@ -1,7 +1,8 @@
 # Shared steps of start.sh, test.sh and dev.sh (sourced, not run).
 export NEXT_TELEMETRY_DISABLED=1
 
-lock_hash() { sha1sum package-lock.json package.json | sha1sum | cut -c1-16; }
+# The patches under patches/ are applied by npm's postinstall (patch-package), so they count too.
+lock_hash() { cat package-lock.json package.json patches/*.patch 2>/dev/null | sha1sum | cut -c1-16; }
 
 # npm ci when node_modules is missing or was installed from another lock file.
 ensure_node_modules() {
