@@ -517,6 +517,11 @@ export const mailOutbox = pgTable(
     lastError: text("last_error"),
     createdAt: createdAt(),
     sentAt: ts("sent_at"),
+    // A worker's claim: held until claimed_until on the database clock, released when it records the outcome.
+    claimToken: text("claim_token"),
+    claimedUntil: ts("claimed_until"),
+    // Fixed before the first send, so a resend after an unknown outcome carries the same Message-ID.
+    messageId: text("message_id"),
   },
   (t) => [
     index("mail_outbox_due_idx").on(t.status, t.nextAttemptAt),

@@ -10,8 +10,10 @@ results=$(mktemp -d)
 ensure_node_modules
 ensure_chromium
 
-export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-54339}
-bash scripts/db.sh start
+stop_on_exit
+export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-}
+start_cluster
+echo "[db:test] on 127.0.0.1:$DB_PORT"
 for name in rootbench_test rootbench_e2e; do
   bash scripts/db.sh drop-db "$name" >/dev/null
   bash scripts/db.sh create-db "$name" >/dev/null
@@ -36,21 +38,19 @@ step "browser tests"
 ensure_build
 DATABASE_URL=$E2E_DATABASE_URL npx tsx --conditions=react-server db/migrate.ts
 DATABASE_URL=$E2E_DATABASE_URL npx tsx --conditions=react-server db/seed/index.ts >/dev/null
-E2E_PORT=${E2E_PORT:-3100}
-export E2E_SMTP_PORT=${E2E_SMTP_PORT:-2626}
-pids=()
-cleanup() { for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done; }
-trap cleanup EXIT
+pick_port E2E_PORT 3100
+pick_port E2E_SMTP_PORT 2626
 if [ -f scripts/mail/fake-smtp.ts ]; then
-  SMTP_PORT=$E2E_SMTP_PORT SMTP_CONTROL_PORT=$((E2E_SMTP_PORT + 1)) npx tsx --conditions=react-server scripts/mail/fake-smtp.ts >"$results/smtp.log" 2>&1 & pids+=($!)
+  start_bg "$results/smtp.log" env SMTP_PORT="$E2E_SMTP_PORT" SMTP_CONTROL_PORT=$((E2E_SMTP_PORT + 1)) npx tsx --conditions=react-server scripts/mail/fake-smtp.ts
 fi
 if [ -f scripts/mail/worker.ts ]; then
-  DATABASE_URL=$E2E_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT MAIL_POLL_MS=300 npx tsx --conditions=react-server scripts/mail/worker.ts >"$results/mail-worker.log" 2>&1 & pids+=($!)
+  start_bg "$results/mail-worker.log" env DATABASE_URL="$E2E_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" MAIL_POLL_MS=300 npx tsx --conditions=react-server scripts/mail/worker.ts
 fi
-NODE_ENV=production DATABASE_URL=$E2E_DATABASE_URL SMTP_PORT=$E2E_SMTP_PORT \
-  node node_modules/next/dist/bin/next start -p "$E2E_PORT" -H 127.0.0.1 >"$results/server.log" 2>&1 & pids+=($!)
+start_bg "$results/server.log" env NODE_ENV=production DATABASE_URL="$E2E_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" \
+  node node_modules/next/dist/bin/next start -p "$E2E_PORT" -H 127.0.0.1
+export E2E_PROCESS_PIDS="${STARTED_PIDS[*]}"
 wait_for_http "http://127.0.0.1:$E2E_PORT/api/health" 90 || { tail -n 40 "$results/server.log"; exit 1; }
-E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" DATABASE_URL=$E2E_DATABASE_URL E2E_SMTP_CONTROL="http://127.0.0.1:$((E2E_SMTP_PORT + 1))" \
+E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" E2E_PROCESS_PIDS="$E2E_PROCESS_PIDS" DATABASE_URL=$E2E_DATABASE_URL E2E_SMTP_CONTROL="http://127.0.0.1:$((E2E_SMTP_PORT + 1))" \
   npx vitest run --config tests/e2e/vitest.config.ts \
   --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || { tail -n 40 "$results/server.log"; exit 1; }
 

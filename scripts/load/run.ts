@@ -5,7 +5,7 @@ import { execFileSync } from "node:child_process";
 import { and, count, eq, inArray } from "drizzle-orm";
 import { db, sql } from "@/db";
 import { mailOutbox, users } from "@/db/schema";
-import { deliverDue } from "@/lib/mail/deliver";
+import { outboxDeliverer } from "@/lib/mail/deliver";
 import { startFakeSmtp } from "@/lib/mail/fake-smtp";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { smtpTransport } from "@/lib/mail/transport";
@@ -65,17 +65,18 @@ async function main() {
   // Fault 2: the SMTP server down for a minute while 20 messages are queued.
   console.log("\nfault: SMTP down for 60 s with 20 messages queued");
   const transport = smtpTransport({ host: "127.0.0.1", port: smtpPort, secure: false } as Parameters<typeof smtpTransport>[0]);
+  const deliverer = outboxDeliverer(transport, { from: "load@example.test" });
   const ids: number[] = [];
   for (let i = 0; i < 20; i++) ids.push(await enqueueMail(db, { to: `load-${i}@example.test`, subject: `Load test ${i}`, text: "Queued during an SMTP outage." }));
   const downUntil = Date.now() + 60_000;
   while (Date.now() < downUntil) {
-    await deliverDue(transport, { from: "load@example.test" });
+    await deliverer.deliverDue();
     await new Promise((r) => setTimeout(r, 2000));
   }
   const smtp = await startFakeSmtp({ port: smtpPort, controlPort: null });
   const giveUp = Date.now() + 5 * 60_000;
   while (Date.now() < giveUp && smtp.messages.length < ids.length) {
-    await deliverDue(transport, { from: "load@example.test" });
+    await deliverer.deliverDue();
     await new Promise((r) => setTimeout(r, 2000));
   }
   const [{ n: sent }] = await db.select({ n: count() }).from(mailOutbox).where(and(inArray(mailOutbox.id, ids), eq(mailOutbox.status, "sent")));

@@ -1,0 +1,3 @@
+ALTER TABLE "mail_outbox" ADD COLUMN "claim_token" text;--> statement-breakpoint
+ALTER TABLE "mail_outbox" ADD COLUMN "claimed_until" timestamp with time zone;--> statement-breakpoint
+ALTER TABLE "mail_outbox" ADD COLUMN "message_id" text;
