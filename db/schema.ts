@@ -616,3 +616,15 @@ export const writeupPartsRelations = relations(writeupParts, ({ one }) => ({
   writeup: one(writeups, { fields: [writeupParts.writeupId], references: [writeups.id] }),
   part: one(parts, { fields: [writeupParts.partId], references: [parts.id] }),
 }));
+
+/* ---------- secrets shared by every app process ---------- */
+
+/**
+ * Keys the app makes for itself when the environment gives none (e.g. the CSV import signing
+ * key): made once by whichever process needs it first, then the same for every process.
+ */
+export const appSecrets = pgTable("app_secrets", {
+  name: text("name").primaryKey(),
+  value: text("value").notNull(),
+  createdAt: createdAt(),
+});

@@ -6,8 +6,12 @@ import { outboxDeliverer } from "../../lib/mail/deliver";
 import { smtpConfigFromEnv, smtpTransport } from "../../lib/mail/transport";
 import { loadShop } from "../../lib/cases/shop";
 import { exitWithParents } from "../../lib/mail/exit-with-parents";
+import { sweepOrphans } from "../../lib/storage/sweep";
 
 const pollMs = Number(process.env.MAIL_POLL_MS ?? 2000);
+// The same worker clears stored files that no upload row points at (see lib/storage/sweep.ts).
+const sweepMs = Number(process.env.STORAGE_SWEEP_MINUTES ?? 30) * 60_000;
+let lastSweep = 0;
 let running = true;
 
 async function main() {
@@ -23,6 +27,13 @@ async function main() {
       if (report.sent || report.retrying || report.failed) console.log(`[mail-worker] sent ${report.sent}, retrying ${report.retrying}, failed ${report.failed}`);
     } catch (error) {
       console.error("[mail-worker] pass failed:", error instanceof Error ? error.message : error);
+    }
+    if (Date.now() - lastSweep > sweepMs) {
+      lastSweep = Date.now();
+      await sweepOrphans().then(
+        (removed) => { if (removed.length) console.log(`[mail-worker] removed ${removed.length} stored files no upload points at`); },
+        (error: unknown) => console.error("[mail-worker] storage sweep failed:", error instanceof Error ? error.message : error),
+      );
     }
     await new Promise((resolve) => setTimeout(resolve, pollMs));
   }
