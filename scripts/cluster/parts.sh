@@ -7,15 +7,17 @@
 ensure_haproxy() {
   if ! command -v haproxy >/dev/null 2>&1; then
     echo "[setup] installing Debian's haproxy"
-    if ! DEBIAN_FRONTEND=noninteractive apt-get install -y --no-install-recommends haproxy >/tmp/rootbench-apt.log 2>&1; then
-      apt-get update >>/tmp/rootbench-apt.log 2>&1
-      DEBIAN_FRONTEND=noninteractive apt-get install -y --no-install-recommends haproxy >>/tmp/rootbench-apt.log 2>&1
+    local apt=(apt-get -o DPkg::Lock::Timeout=300 install -y --no-install-recommends haproxy)
+    if ! DEBIAN_FRONTEND=noninteractive "${apt[@]}" >/tmp/rootbench-apt.log 2>&1; then
+      apt-get -o DPkg::Lock::Timeout=300 update >>/tmp/rootbench-apt.log 2>&1
+      DEBIAN_FRONTEND=noninteractive "${apt[@]}" >>/tmp/rootbench-apt.log 2>&1
     fi
     if command -v systemctl >/dev/null 2>&1 && systemctl is-system-running >/dev/null 2>&1; then
       systemctl disable --now haproxy >/dev/null 2>&1 || true
       systemctl mask haproxy >/dev/null 2>&1 || true
     elif [ -x /etc/init.d/haproxy ]; then
       /etc/init.d/haproxy stop >/dev/null 2>&1 || true
+      update-rc.d haproxy disable >/dev/null 2>&1 || true
     fi
   fi
 }
@@ -32,16 +34,19 @@ ensure_actions_key() {
   export NEXT_SERVER_ACTIONS_ENCRYPTION_KEY
 }
 
-# Secrets every process must share (the CSV import signing key): from the environment, else made
-# once for this checkout, so all processes started here agree.
-ensure_shared_secrets() {
-  local file=.data/cluster/csv-import.key
-  if [ -z "${CSV_IMPORT_SECRET:-}" ]; then
-    mkdir -p .data/cluster
-    if [ ! -s "$file" ]; then (umask 077; openssl rand -hex 32 > "$file"); fi
-    CSV_IMPORT_SECRET=$(cat "$file")
+# N loopback ports for the app processes: APP_PORTS when given (checked free), else free ones from 3401.
+app_ports() { # count
+  local out=() port
+  if [ -n "${APP_PORTS:-}" ]; then
+    for port in $APP_PORTS; do
+      if port_in_use "$port"; then echo "[cluster] app port $port is taken by $(port_holder "$port")" >&2; exit 1; fi
+      out+=("$port")
+    done
+  else
+    port=3401
+    while [ ${#out[@]} -lt "$1" ]; do port_in_use "$port" || out+=("$port"); port=$((port + 1)); done
   fi
-  export CSV_IMPORT_SECRET
+  echo "${out[@]:0:$1}"
 }
 
 # The S3 settings for the local fake S3 (any credentials do; s3rver does not check them).
