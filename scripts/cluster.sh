@@ -18,16 +18,17 @@ mkdir -p "$LOGS"
 export DB_CLUSTER=app
 start_cluster
 export DATABASE_URL=${DATABASE_URL:-$(db_url_for app "$DB_PORT" rootbench)}
+# The fake S3 first: the seed's photos go where the app processes will look for them.
+pick_port S3_PORT 4530
+use_fake_s3 "$S3_PORT" .data/s3
 npx tsx --conditions=react-server db/migrate.ts
 npx tsx --conditions=react-server db/seed/index.ts
 
 # One build for every process, made with the shared server-actions key.
 ensure_actions_key
 echo "[cluster] building the app once for all $N processes"
-npx next build >"$LOGS/build.log" 2>&1 || { tail -n 40 "$LOGS/build.log"; exit 1; }
+run_in_group "$LOGS/build.log" npx next build || { tail -n 40 "$LOGS/build.log"; exit 1; }
 
-pick_port S3_PORT 4530
-use_fake_s3 "$S3_PORT" .data/s3
 pick_port SMTP_PORT 2525
 start_bg "$LOGS/fake-smtp.log" env SMTP_CONTROL_PORT=$((SMTP_PORT + 1)) npx tsx --conditions=react-server scripts/mail/fake-smtp.ts
 

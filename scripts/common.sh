@@ -23,7 +23,7 @@ ensure_build() {
     return 0
   fi
   echo "[setup] building the app (next build)"
-  npx next build >/tmp/rootbench-build.log 2>&1 || { tail -n 60 /tmp/rootbench-build.log; echo "[setup] build failed"; exit 1; }
+  run_in_group /tmp/rootbench-build.log npx next build || { tail -n 60 /tmp/rootbench-build.log; echo "[setup] build failed"; exit 1; }
 }
 
 ensure_chromium() {
@@ -61,6 +61,15 @@ start_bg() { # log-file command…   (the pid is in $!)
   local log=$1; shift
   setsid "$@" >"$log" 2>&1 </dev/null &
   STARTED_PIDS+=($!)
+}
+
+# A long foreground step (a build) in its own process group, so a kill of the script stops it too.
+run_in_group() { # log-file command…
+  local rc=0
+  start_bg "$@"
+  wait $! || rc=$?
+  unset 'STARTED_PIDS[-1]'
+  return $rc
 }
 
 stop_started() {

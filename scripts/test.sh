@@ -54,6 +54,29 @@ E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" E2E_PROCESS_PIDS="$E2E_PROCESS_PIDS" D
   npx vitest run --config tests/e2e/vitest.config.ts \
   --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || { tail -n 40 "$results/server.log"; exit 1; }
 
+step "two app processes behind HAProxy"
+source scripts/cluster/parts.sh
+ensure_haproxy
+LOGS=$results/cluster
+mkdir -p "$LOGS"
+bash scripts/db.sh drop-db rootbench_cluster >/dev/null
+bash scripts/db.sh create-db rootbench_cluster >/dev/null
+export DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_cluster)
+pick_port TEST_S3_PORT 4531
+use_fake_s3 "$TEST_S3_PORT" "$results/s3"
+npx tsx --conditions=react-server db/migrate.ts >/dev/null
+npx tsx --conditions=react-server db/seed/index.ts >/dev/null
+read -r -a cluster_ports <<< "$(app_ports 2)"
+start_app_process 1 "${cluster_ports[0]}"
+start_app_process 2 "${cluster_ports[1]}"
+for p in "${cluster_ports[@]}"; do wait_for_http "http://127.0.0.1:$p/api/health" 90 || { tail -n 40 "$LOGS/app-1.log" "$LOGS/app-2.log"; exit 1; }; done
+pick_port TEST_HAPROXY_PORT 3400
+start_haproxy "$TEST_HAPROXY_PORT" "${cluster_ports[@]}"
+wait_for_http "http://127.0.0.1:$TEST_HAPROXY_PORT/api/health" 30 || { cat "$LOGS/haproxy.log"; exit 1; }
+CLUSTER_BASE_URL="http://127.0.0.1:$TEST_HAPROXY_PORT" CLUSTER_APP_URLS="http://127.0.0.1:${cluster_ports[0]} http://127.0.0.1:${cluster_ports[1]}" \
+  npx vitest run --config tests/cluster/vitest.config.ts \
+  --reporter=default --reporter=json --outputFile.json="$results/cluster.json" || { tail -n 40 "$LOGS/app-1.log" "$LOGS/app-2.log"; exit 1; }
+
 node -e '
   const fs = require("fs"); let p = 0, f = 0, s = 0;
   for (const file of process.argv.slice(1)) {
@@ -62,5 +85,5 @@ node -e '
     p += r.numPassedTests; f += r.numFailedTests; s += r.numPendingTests + (r.numTodoTests || 0);
   }
   console.log(`\n${p} passed, ${f} failed, ${s} skipped`);
-' "$results/vitest.json" "$results/e2e.json"
+' "$results/vitest.json" "$results/e2e.json" "$results/cluster.json"
 echo "npm test took $(( $(date +%s) - started )) s"
