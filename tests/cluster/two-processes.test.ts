@@ -49,7 +49,7 @@ async function signInThrough(base: string, email: string): Promise<string> {
 const asUser = (token: string, base: string) => ({ cookie: `rb_session=${token}`, origin: base });
 
 describe("two app processes behind HAProxy", () => {
-  it("HAProxy spreads requests over both processes", async () => {
+  it("each process and HAProxy in front of them answer /api/health", async () => {
     for (const base of [A, B, BALANCER]) expect((await fetch(`${base}/api/health`)).status).toBe(200);
   });
 
@@ -83,7 +83,7 @@ describe("two app processes behind HAProxy", () => {
   it("answers recorded alternately through each process follow on from each other", async () => {
     const tech = await userId("tech@rootbench.test");
     const { token } = await createSession(tech);
-    const [version] = await db.select({ id: treeVersions.id }).from(treeVersions).where(eq(treeVersions.state, "published")).orderBy(asc(treeVersions.id)).limit(1);
+    const [version] = await sql<{ id: number }[]>`select max(id) as id from tree_versions where state = 'published' group by tree_id order by 1 limit 1`;
     const graph = (await loadGraph(version.id))!;
     const dx = toDxTree(graph);
     const [scope] = await sql<{ id: number }[]>`select family_id as id from tree_scope s join tree_versions v on v.tree_id = s.tree_id where v.id = ${version.id} limit 1`;
@@ -134,14 +134,24 @@ describe("two app processes behind HAProxy", () => {
     const editor = new TreeEditorPage(browser.page);
     await editor.waitReady();
     await editor.publish("Reworded first question");
-    await browser.page.waitForURL(/\/trees\/\d+\?published=1$/, { timeout: 30_000 });
+    await browser.page.getByText(/Version \d+ is published\./).waitFor({ timeout: 30_000 });
+    const [{ state }] = await db.select({ state: treeVersions.state }).from(treeVersions).where(eq(treeVersions.id, draftId));
+    expect(state).toBe("published");
 
-    // Through process B, the tree a new case is offered is the republished version.
-    const offered = await fetch(`${B}/api/trees/${tree.id}`, { headers: asUser(await signInThrough(B, "senior@rootbench.test"), B) });
-    expect(offered.status).toBe(200);
-    const body = (await offered.json()) as { version: { id: number; state: string }; graph: { nodes: { prompt: string }[] } };
-    expect(body.version.id).toBe(draftId);
-    expect(body.version.state).toBe("published");
-    expect(body.graph.nodes.map((n) => n.prompt)).toContain(wording);
+    // Through process B, a new case is offered the republished version and walks its new wording.
+    const [scope] = await sql<{ id: number }[]>`
+      select coalesce((select family_id from tree_scope where tree_id = ${tree.id} limit 1), (select min(id) from motor_families)) as id`;
+    await signInThrough(B, "senior@rootbench.test");
+    const page = browser.page;
+    await page.goto(`${B}/triage/new`);
+    await page.getByLabel("Caller's name").fill("Cluster caller");
+    await page.getByLabel("Phone").fill("+00 555 0100 0001");
+    await page.getByLabel("Motor family").selectOption(String(scope.id));
+    const choice = page.locator(`input[name="treeVersionId"][value="${draftId}"]`);
+    await choice.check();
+    await page.getByRole("button", { name: "Start the walk" }).click();
+    await page.getByText(wording).first().waitFor({ timeout: 30_000 });
+    const [newest] = await sql<{ v: number }[]>`select tree_version_id as v from cases order by id desc limit 1`;
+    expect(newest.v).toBe(draftId);
   });
 });
