@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
-import { formatDay } from "@/components/writeups/format";
+import { formatDay } from "@/lib/format";
 import type { PracticeCaseRow } from "@/lib/practice/queries";
 
 const RIDING: Record<string, string> = { road: "road", trail: "trail", cargo: "cargo", commuting: "commuting" };

@@ -4,7 +4,7 @@ import { Panel } from "@/components/ui/panel";
 import { causePareto } from "@/lib/reports/pareto";
 import { dayString, filterQuery, parseReportFilter } from "@/lib/reports/period";
 import { resolveScope } from "@/lib/reports/scope";
-import { pct } from "./format";
+import { pct } from "@/lib/format";
 
 /** The lead's home: the five most frequent confirmed causes of the calendar quarter so far. */
 export async function TopCausesPanel({ today = new Date() }: { today?: Date }) {

@@ -1,5 +1,5 @@
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { percent } from "./format";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { percent } from "@/lib/format";
 
 /** Causes by probability with bars; ruled-out causes below, each with the answer that ruled it out. */
 export function CauseRanking({ ranking, nameOf, explainAnswer }: {

@@ -1,7 +1,6 @@
-import { computeRanking } from "@/lib/cases/ranking";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { ModelCache, type DxSettings, type DxTree } from "@/lib/diagnosis";
-import type { WalkStep } from "@/lib/cases/walk-types";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { ModelCache, rankingAfter, type DxSettings, type DxTree } from "@/lib/diagnosis";
+import type { WalkStep } from "@/lib/triage/walk-types";
 
 export interface WalkState {
   steps: WalkStep[];
@@ -27,7 +26,7 @@ export function optimisticWalk(tree: DxTree, settings: DxSettings) {
     const answers = [...state.steps, change].map((s) => ({ nodeId: s.nodeKey, optionId: s.optionKey }));
     let ranking: StoredRanking;
     try {
-      ranking = computeRanking(tree, answers, settings, models);
+      ranking = rankingAfter(tree, answers, settings, models);
     } catch {
       ranking = currentRanking(state);
     }

@@ -1,6 +1,5 @@
 import { z } from "zod";
 import { authorize, type Access } from "@/lib/auth/authorize";
-import type { CallerCheck } from "@/lib/auth/caller-check";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, isAppError } from "@/lib/errors";
 import { formDataToObject, echoFields } from "./form-data";
@@ -27,20 +26,6 @@ export interface ActionSpec<S extends z.ZodType, R> {
   access: Access;
   input: S;
   run: (input: z.output<S>, ctx: ActionContext) => Promise<R | ActionSuccess<R>>;
-  /**
-   * Optional: the same work in one database round trip, for a hot action whose one write can
-   * check the caller itself (`callerRow`), instead of a session query first. Gets input that has
-   * already passed `input`. Returns null whenever it did not complete for any reason (no such
-   * session, a role not allowed, bad input, a conflict): nothing is written then, and the
-   * ordinary path (session, role, validation, run) answers with its result or its error.
-   */
-  inOneTrip?: (input: z.output<S>, caller: CallerCheck) => Promise<OneTripDone<R> | null>;
-}
-
-export interface OneTripDone<R> {
-  value: R;
-  /** When the caller's session expires, as the write statement saw it. */
-  sessionExpiresAt: Date;
 }
 
 export function defineAction<S extends z.ZodType, R>(spec: ActionSpec<S, R>): ActionSpec<S, R> {

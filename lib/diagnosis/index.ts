@@ -11,6 +11,7 @@ export type {
   CauseScores,
   RankedQuestion,
   Conclusion,
+  Ranking,
   BenchItem,
   BenchPlan,
   TreeProblem,
@@ -23,13 +24,14 @@ export type {
   CalibrationBin,
   PathWalk,
 } from "./types";
+export { STRENGTHS } from "./types";
 export { DiagnosisError, type DiagnosisErrorCode } from "./errors";
 export { DEFAULT_WEIGHTS } from "./weights";
 export { scoreCauses } from "./score";
 export { entropyBits, expectedInformationGain } from "./information";
 export { rankNextQuestions } from "./next-question";
 export { suggestConclusion } from "./conclusion";
-export { analyseAnswers, type Analysis } from "./analyse";
+export { rankingAfter, RANKING_SUGGESTIONS } from "./ranking";
 export { ModelCache } from "./model";
 export { benchPlan } from "./bench-plan";
 export { validateTree } from "./validate";

@@ -3,7 +3,10 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions } from "@/db/schema";
 import { AppError } from "@/lib/errors";
-import { loadGraph } from "@/lib/trees/graph";
+import { answersOf, caseRanking } from "@/lib/triage/answer";
+import { loadCaseContext } from "@/lib/triage/context";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { publishedTree } from "@/lib/triage/tree-cache";
 import { buildReplay } from "./replay";
 import type { PracticeReplay } from "./types";
 
@@ -66,15 +69,17 @@ async function practiceCaseRow(caseId: number) {
 /** The replay of one case for its practice page; the bench result stays on the server. */
 export async function loadPracticeReplay(caseId: number): Promise<PracticeReplay> {
   const row = await practiceCaseRow(caseId);
-  const [graph, steps] = await Promise.all([
-    loadGraph(row.treeVersionId),
-    db.select({ nodeId: caseSteps.nodeId, optionId: caseSteps.optionId }).from(caseSteps).where(eq(caseSteps.caseId, caseId)).orderBy(asc(caseSteps.seq)),
+  const [steps, ctx] = await Promise.all([
+    db.select({ nodeId: caseSteps.nodeId, optionId: caseSteps.optionId, ranking: caseSteps.ranking }).from(caseSteps).where(eq(caseSteps.caseId, caseId)).orderBy(asc(caseSteps.seq)),
+    loadCaseContext(caseId, { historyAsOfStart: true }),
   ]);
-  if (!graph) throw new AppError("not_found", "The tree this case was walked on is missing.");
+  if (!ctx) throw new AppError("not_found", "That case does not exist.");
+  const tree = await publishedTree(ctx.treeVersionId);
   return buildReplay(
     { caseId: row.id, family: row.family, symptom: row.symptom, treeTitle: row.treeTitle, ridingUse: row.ridingUse, callerKind: row.callerKind },
-    graph,
-    steps,
+    tree.graph,
+    steps.map((s) => ({ nodeId: s.nodeId, optionId: s.optionId, ranking: s.ranking as StoredRanking })),
+    caseRanking(tree, answersOf(tree, []), ctx),
   );
 }
 

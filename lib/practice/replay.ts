@@ -1,4 +1,4 @@
-import { scoreCauses, walkPath, type DxAnswer, type DxTree } from "@/lib/diagnosis";
+import { walkPath, type DxAnswer, type DxTree, type Ranking } from "@/lib/diagnosis";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import { toDxTree } from "@/lib/trees/graph";
 import type { PracticeReplay, PracticeStep, RankingView } from "./types";
@@ -6,6 +6,8 @@ import type { PracticeReplay, PracticeStep, RankingView } from "./types";
 export interface RecordedStep {
   nodeId: number;
   optionId: number;
+  /** The ranking the technician's screen showed after this answer, as the step stored it. */
+  ranking: Ranking;
 }
 
 export interface CaseFacts {
@@ -17,14 +19,13 @@ export interface CaseFacts {
   callerKind: string;
 }
 
-function rankingAfter(dx: DxTree, answers: DxAnswer[], graph: TreeGraph): RankingView {
+function rankingView(ranking: Ranking, graph: TreeGraph): RankingView {
   const nameOf = new Map(graph.causes.map((c) => [c.slug, c.name]));
   const labelOf = new Map(graph.options.map((o) => [o.key, o.label]));
   const nodeTitleOf = new Map(graph.nodes.map((n) => [n.key, n.title || n.prompt]));
-  const scores = scoreCauses(dx, answers);
   return {
-    unlisted: scores.unlisted,
-    causes: scores.causes.map((c) => ({
+    unlisted: ranking.unlisted,
+    causes: ranking.causes.map((c) => ({
       slug: c.causeId,
       name: nameOf.get(c.causeId) ?? c.causeId,
       probability: c.probability,
@@ -44,15 +45,16 @@ function cautionsAfter(dx: DxTree, answers: DxAnswer[], graph: TreeGraph): strin
 
 /**
  * Replays a closed case on the tree version it was walked on: each recorded answer with the node
- * that asked it, the engine's ranking after each answer, and the cautions the walk reached.
+ * that asked it, the ranking its step stored (what the technician saw), and the cautions the walk
+ * reached. `start` is the ranking before the first answer, which no step stores.
  */
-export function buildReplay(facts: CaseFacts, graph: TreeGraph, recorded: RecordedStep[]): PracticeReplay {
+export function buildReplay(facts: CaseFacts, graph: TreeGraph, recorded: RecordedStep[], start: Ranking): PracticeReplay {
   const dx = toDxTree(graph);
   const nodeById = new Map(graph.nodes.map((n) => [n.id, n]));
   const optionById = new Map(graph.options.map((o) => [o.id, o]));
   const answers: DxAnswer[] = [];
   const steps: PracticeStep[] = [];
-  const rankings: RankingView[] = [rankingAfter(dx, [], graph)];
+  const rankings: RankingView[] = [rankingView(start, graph)];
   const openingCautions = cautionsAfter(dx, [], graph);
   let seen = new Set(openingCautions);
   for (const [i, r] of recorded.entries()) {
@@ -66,11 +68,7 @@ export function buildReplay(facts: CaseFacts, graph: TreeGraph, recorded: Record
       cautions: cautions.filter((c) => !seen.has(c)),
     });
     seen = new Set(cautions);
-    try {
-      rankings.push(rankingAfter(dx, answers, graph));
-    } catch {
-      rankings.push(rankings[rankings.length - 1]);
-    }
+    rankings.push(rankingView(r.ranking, graph));
   }
   return {
     ...facts, steps, rankings, openingCautions,

@@ -31,7 +31,11 @@ export interface PracticeReplay {
   ridingUse: string;
   callerKind: string;
   steps: PracticeStep[];
-  /** rankings[i] is the engine's ranking after the first i answers (rankings[0]: before any). */
+  /**
+   * rankings[i] is the ranking shown after the first i answers, as the case's steps stored it;
+   * rankings[0], before any answer, is worked out with the shop's settings and the family's
+   * history as it stood when the case was started.
+   */
   rankings: RankingView[];
   /** The causes the tree version knows: what the trainee may commit to. */
   choices: { slug: string; name: string }[];

@@ -33,16 +33,3 @@ export async function closedCasesOf(versionId: number): Promise<ClosedCase[]> {
   }
   return out;
 }
-
-export interface ClosedStamp {
-  closed: number;
-  latest: string | null;
-}
-
-/** How many closed cases a version has and when the last one closed: what a cached result depends on. */
-export async function closedStampOf(versionId: number): Promise<ClosedStamp> {
-  const [row] = await pg<ClosedStamp[]>`
-    select count(*)::int as closed, max(closed_at)::text as latest
-    from cases where tree_version_id = ${versionId} and status = 'closed'`;
-  return row;
-}

@@ -4,8 +4,7 @@ import { reviewVersion } from "./review";
 
 /**
  * Learned P(o|k) for scoring a case on this tree version (option key → cause slug → p), for
- * trees whose likelihood setting is "learned". In-memory cache keyed by the version and the time
- * of its latest closed case, so a busy triage screen costs one small count query per call.
+ * trees whose likelihood setting is "learned", from the version's closed cases as they are now.
  */
 export async function learnedLikelihoodsFor(treeVersionId: number): Promise<DxSettings["likelihoods"]> {
   return (await reviewVersion(treeVersionId)).likelihoods;

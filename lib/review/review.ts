@@ -3,14 +3,9 @@ import { learnLikelihoods, type Strength } from "@/lib/diagnosis";
 import { AppError } from "@/lib/errors";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { TreeGraph } from "@/lib/trees/graph-types";
-import { closedCasesOf, closedStampOf } from "./closed-cases";
+import { closedCasesOf } from "./closed-cases";
 import { nearestStrength } from "./strength";
 import type { SuggestionView, VersionReview } from "./types";
-
-const MAX_CACHED = 64;
-const globalCache = globalThis as unknown as { rootbenchReviews?: Map<number, { stamp: string; review: Promise<VersionReview> }> };
-// Keyed by version; an entry is good while no case of the version has closed (or reopened) since.
-const cache = (globalCache.rootbenchReviews ??= new Map());
 
 function strengthOf(graph: TreeGraph, optionKey: string, causeSlug: string): Strength {
   return graph.options.find((o) => o.key === optionKey)?.evidence[causeSlug] ?? "neutral";
@@ -43,24 +38,7 @@ async function computeReview(versionId: number): Promise<VersionReview> {
   return { treeId: graph.treeId, versionId, versionNumber: graph.number, cases: closed.length, likelihoods: likelihoods ?? {}, suggestions: views };
 }
 
-/**
- * learnLikelihoods over the closed cases of one tree version, with the suggestions in the
- * tree's own words. Cached in memory per version until another case of it closes or reopens.
- */
-export async function reviewVersion(versionId: number): Promise<VersionReview> {
-  const stamp = await closedStampOf(versionId);
-  const key = `${stamp.closed}|${stamp.latest ?? ""}`;
-  const hit = cache.get(versionId);
-  if (hit && hit.stamp === key) return hit.review;
-  const review = computeReview(versionId);
-  cache.delete(versionId);
-  cache.set(versionId, { stamp: key, review });
-  review.catch(() => cache.delete(versionId));
-  while (cache.size > MAX_CACHED) cache.delete(cache.keys().next().value as number);
-  return review;
-}
-
-/** Drops cached reviews (tests, and after an import that adds closed cases). */
-export function forgetReviews(): void {
-  cache.clear();
+/** learnLikelihoods over the closed cases of one tree version, with the suggestions in the tree's own words. */
+export function reviewVersion(versionId: number): Promise<VersionReview> {
+  return computeReview(versionId);
 }

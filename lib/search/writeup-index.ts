@@ -1,11 +1,7 @@
 import MiniSearch, { type Options } from "minisearch";
-import { TopHits } from "./top-hits";
 import type { SearchDoc, SearchFilters, SerializedIndex } from "./types";
 
-/**
- * The seven searchable parts of a write-up go into four indexed fields, one per weight: fewer fields
- * means fewer posting lists to walk per typed word, which is what keeps a 10,000-document search fast.
- */
+/** The seven searchable parts of a write-up go into four indexed fields, one per weight. */
 const FIELDS = ["title", "facets", "summary", "body"] as const;
 type Field = (typeof FIELDS)[number];
 
@@ -88,7 +84,6 @@ export async function serializeIndex(docs: readonly SearchDoc[]): Promise<Serial
 /** The client-side search over published write-ups: the same code runs in the page and in the tests. */
 export class WriteupIndex {
   private readonly mini: MiniSearch<SearchDoc>;
-  private readonly top: TopHits | null;
   private readonly byId: Map<number, SearchDoc>;
   readonly docs: readonly SearchDoc[];
 
@@ -102,7 +97,6 @@ export class WriteupIndex {
       this.mini = new MiniSearch<SearchDoc>(MINI_OPTIONS);
       this.mini.addAll(docs);
     }
-    this.top = TopHits.attach(this.mini, FIELDS, FIELD_BOOSTS);
   }
 
   get size(): number {
@@ -139,9 +133,8 @@ export class WriteupIndex {
     };
   }
 
-  /** The best `limit` matches and how many there are: through TopHits, or MiniSearch's own search when it cannot. */
+  /** The best `limit` matches and how many there are, from MiniSearch's own search. */
   private query(query: string, combineWith: "AND" | "OR", fuzzy: typeof fuzzyDistance | false, keep: ((id: number) => boolean) | undefined, limit: number) {
-    if (this.top?.usable) return this.top.search(query, { combineWith, fuzzy, prefix: true, filter: keep, limit });
     const results = this.mini.search(query, { combineWith, fuzzy, filter: keep ? (r) => keep(r.id) : undefined });
     return {
       total: results.length,

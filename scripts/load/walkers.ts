@@ -1,13 +1,18 @@
-// Virtual technicians walking triage cases through POST /api/cases/:id/steps, for the load script
-// and the fault test. Each walker keeps one case going, answers its current question with a
-// random option, and starts a new case when the walk ends. Bounded by time and request count.
+// Virtual technicians walking triage cases, for the load script, the fault test and the perceived
+// benchmark. Each walker keeps one case going, answers its current question with a random option,
+// and starts a new case when the walk ends. Answers go the way the triage screen sends them (the
+// answerStep server action, as the browser posts it) or through POST /api/cases/:id/steps.
+// Bounded by time and request count.
 import { asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { caseSteps, motorFamilies, treeScope, treeVersions, trees } from "@/db/schema";
 import { createSession } from "@/lib/auth/session";
-import { startCase } from "@/lib/cases/start";
+import { startCase } from "@/lib/triage/start";
 import { walkPath, type DxAnswer } from "@/lib/diagnosis";
 import { loadGraph, toDxTree, type TreeGraph } from "@/lib/trees/graph";
+import type { ActionResult } from "@/lib/actions/define";
+import type { AnsweredStep } from "@/lib/triage/answer";
+import { callServerAction, serverActionId } from "./server-action";
 
 export interface LoadOptions {
   baseUrl: string;
@@ -15,6 +20,8 @@ export interface LoadOptions {
   seconds: number;
   maxRequests?: number;
   userId: string;
+  /** "screen" (default): the server action the triage screen calls; "route": the JSON route. */
+  via?: "screen" | "route";
 }
 
 export interface LoadResult {
@@ -56,10 +63,35 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
   const deadline = Date.now() + options.seconds * 1000;
   const max = options.maxRequests ?? Number.POSITIVE_INFINITY;
   let counter = 0;
+  const via = options.via ?? "screen";
+  const answerActionId = via === "screen" ? serverActionId("app/(shop)/triage/actions.ts", "answerStep") : "";
+
+  /** One answer; the stored step's id, or the reason it was not stored. */
+  async function answer(caseId: number, nodeId: number, optionId: number, cookie: string): Promise<{ stepId: number } | { error: string }> {
+    if (via === "route") {
+      const response = await fetch(`${options.baseUrl}/api/cases/${caseId}/steps`, {
+        method: "POST", headers: { cookie, "content-type": "application/json", origin: options.baseUrl }, body: JSON.stringify({ nodeId, optionId }),
+      });
+      if (response.status !== 201) {
+        await response.text();
+        return { error: `HTTP ${response.status}` };
+      }
+      return { stepId: ((await response.json()) as { step: { id: number } }).step.id };
+    }
+    const form = new FormData();
+    form.set("caseId", String(caseId));
+    form.set("nodeId", String(nodeId));
+    form.set("optionId", String(optionId));
+    const { status, value } = await callServerAction<ActionResult<AnsweredStep>>({
+      baseUrl: options.baseUrl, pagePath: `/triage/${caseId}`, actionId: answerActionId, cookie, args: [null, form],
+    });
+    if (!value) return { error: `HTTP ${status}` };
+    return value.ok ? { stepId: value.data.step.id } : { error: `action ${value.status}` };
+  }
 
   async function walker(index: number) {
     const { token } = await createSession(options.userId);
-    const headers = { cookie: `rb_session=${token}`, "content-type": "application/json", origin: options.baseUrl };
+    const cookie = `rb_session=${token}`;
     while (Date.now() < deadline && result.requests < max) {
       const { graph, familyId } = treesAvailable[(index + counter++) % treesAvailable.length];
       const dx = toDxTree(graph);
@@ -84,21 +116,16 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
         const started = performance.now();
         result.requests++;
         try {
-          const response = await fetch(`${options.baseUrl}/api/cases/${created.id}/steps`, {
-            method: "POST", headers, body: JSON.stringify({ nodeId: node.id, optionId: option.id }),
-          });
+          const outcome = await answer(created.id, node.id, option.id, cookie);
           const elapsed = performance.now() - started;
-          if (response.status === 201) {
-            const body = (await response.json()) as { step: { id: number } };
+          if ("stepId" in outcome) {
             result.ok++;
             result.latenciesMs.push(elapsed);
-            result.ackedStepIds.push(body.step.id);
+            result.ackedStepIds.push(outcome.stepId);
             answers.push({ nodeId: current, optionId: option.key });
           } else {
             result.failed++;
-            const key = `HTTP ${response.status}`;
-            result.errors[key] = (result.errors[key] ?? 0) + 1;
-            await response.text();
+            result.errors[outcome.error] = (result.errors[outcome.error] ?? 0) + 1;
             answers = await resync(created.id, graph);
           }
         } catch (error) {

@@ -9,7 +9,7 @@ import { caseSteps, treeVersions, trees, users } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { createSession } from "@/lib/auth/session";
-import { startCase } from "@/lib/cases/start";
+import { startCase } from "@/lib/triage/start";
 import { walkPath, type DxAnswer } from "@/lib/diagnosis";
 import { blobStore } from "@/lib/storage";
 import { graphToDraft } from "@/lib/trees/draft";

@@ -1,10 +1,10 @@
-import { DEFAULT_WEIGHTS, benchPlan, rankNextQuestions, scoreCauses, suggestConclusion, walkPath } from "@/lib/diagnosis";
+import { DEFAULT_WEIGHTS, benchPlan, rankingAfter, walkPath } from "@/lib/diagnosis";
 import type { DxAnswer, DxOption, DxSettings, DxTree, Strength } from "@/lib/diagnosis";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { finalRankingOf } from "@/lib/cases/ranking-types";
-import type { Cause, Scenario } from "@/lib/content/catalogue";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { finalRankingOf } from "@/lib/triage/ranking-types";
+import type { Cause, Scenario } from "@/db/seed/content";
 import { callerContact, callerName, serialFor } from "./names";
-import { Random } from "./random";
+import { Random } from "@/lib/random";
 
 export interface SimTree {
   slug: string;
@@ -83,17 +83,6 @@ function optionDistribution(options: DxOption[], causeId: string): number[] {
   return total > 0 ? raw : options.map(() => 1);
 }
 
-function rankingFor(tree: DxTree, answers: DxAnswer[], settings: DxSettings): StoredRanking {
-  const scores = scoreCauses(tree, answers, settings);
-  const suggestions = rankNextQuestions(tree, answers, settings).slice(0, 3);
-  const conclusion = suggestConclusion(tree, answers, settings);
-  return {
-    causes: scores.causes.map((c) => ({ causeId: c.causeId, probability: c.probability, ruledOutBy: c.ruledOutBy })),
-    unlisted: scores.unlisted,
-    suggestions,
-    conclusion,
-  };
-}
 
 /** Walks the tree's default path as a caller whose unit has `trueCause` would answer. */
 function walkAsCaller(rng: Random, authored: DxTree, actual: DxTree, trueCause: string, scenario: Scenario, start: Date, settings: DxSettings, maxSteps = 40) {
@@ -113,7 +102,7 @@ function walkAsCaller(rng: Random, authored: DxTree, actual: DxTree, trueCause: 
     else if (rng.chance(scenario.answerNoise)) chosen = rng.pick(answerable);
     else chosen = answerable[rng.weightedIndex(optionDistribution(answerable, trueCause))];
     answers.push({ nodeId: current, optionId: chosen.id });
-    steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingFor(authored, answers, settings) });
+    steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingAfter(authored, answers, settings) });
   }
   return steps;
 }
@@ -186,7 +175,7 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
     const d = drawCase(createdAt);
     const settings: DxSettings = { history: { ...(history.get(d.familySlug) ?? {}) } };
     const steps = walkAsCaller(rng, d.tree.dx, actualBySlug.get(d.tree.slug)!, d.trueCause, scenario, createdAt, settings);
-    const last = steps.at(-1)?.ranking ?? rankingFor(d.tree.dx, [], settings);
+    const last = steps.at(-1)?.ranking ?? rankingAfter(d.tree.dx, [], settings);
     const triagedAt = new Date(createdAt.getTime() + (steps.length + 2) * 45_000);
 
     // Units that come back: the same serial within 90 days of an earlier visit.

@@ -18,7 +18,11 @@ describe("drizzle queries on the shared client", () => {
 
   it("still send values as parameters, never spliced into the text", async () => {
     const hostile = `x'); drop table users; --`;
-    expect(await db.select().from(users).where(eq(users.email, hostile))).toEqual([]);
-    expect((await db.execute<{ n: number }>(sql`select count(*)::int as n from users`))[0].n).toBeGreaterThanOrEqual(0);
+    const statements = await db.transaction(async (tx) => {
+      expect(await tx.select().from(users).where(eq(users.name, hostile))).toEqual([]);
+      return tx.execute<{ statement: string }>(sql`select statement from pg_prepared_statements where statement like ${'%"users"."name" = $1%'}`);
+    });
+    expect(statements.length).toBe(1);
+    expect(statements[0].statement).not.toContain("drop table");
   });
 });

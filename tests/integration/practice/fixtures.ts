@@ -1,6 +1,7 @@
 import { asc, eq } from "drizzle-orm";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, treeVersions } from "@/db/schema";
-import { loadGraph } from "@/lib/trees/graph";
+import { rankingAfter, type DxSettings } from "@/lib/diagnosis";
+import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import { db } from "../../support/db";
 
@@ -31,9 +32,13 @@ export async function firstPublishedGraph(): Promise<TreeGraph> {
 
 export const CALLER = { callerName: "Imra Vantelow", phone: "+00 555 0199 42", email: "imra.vantelow@example.test", serial: "QX-77-31415" };
 
+/** Settings unlike the defaults, as if the shop had changed them since: the stored rankings were worked out with these. */
+export const SETTINGS_AT_THE_TIME: DxSettings = { weights: { strong: 30, for: 5 }, unlistedShare: 0.2 };
+
 /**
- * A case walked on `graph` along `walk`, with the given status; closed cases get a bench outcome
- * confirming `confirmed` (a cause slug), a part and the usual outcome row.
+ * A case walked on `graph` along `walk`, with the given status, each step storing the ranking the
+ * engine gave with SETTINGS_AT_THE_TIME; closed cases get a bench outcome confirming `confirmed`
+ * (a cause slug), a part and the usual outcome row.
  */
 export async function insertCase(graph: TreeGraph, walk: ReturnType<typeof walkOptions>, options: { status?: "closed" | "open"; confirmed?: string | null } = {}) {
   const [family] = await db.select({ id: motorFamilies.id }).from(motorFamilies).limit(1);
@@ -46,7 +51,11 @@ export async function insertCase(graph: TreeGraph, walk: ReturnType<typeof walkO
     })
     .returning({ id: cases.id });
   if (walk.steps.length) {
-    await db.insert(caseSteps).values(walk.steps.map((s, i) => ({ caseId: row.id, seq: i + 1, nodeId: s.nodeId, optionId: s.optionId, ranking: {} })));
+    const dx = toDxTree(graph);
+    const answers = walk.steps.map((s) => ({ nodeId: graph.nodes.find((n) => n.id === s.nodeId)!.key, optionId: graph.options.find((o) => o.id === s.optionId)!.key }));
+    await db.insert(caseSteps).values(walk.steps.map((s, i) => ({
+      caseId: row.id, seq: i + 1, nodeId: s.nodeId, optionId: s.optionId, ranking: rankingAfter(dx, answers.slice(0, i + 1), SETTINGS_AT_THE_TIME),
+    })));
   }
   const confirmed = options.confirmed === undefined ? walk.reached : options.confirmed;
   if (status === "closed" && confirmed) {

@@ -9,10 +9,13 @@ import { practiceHistory } from "@/lib/practice/history";
 import { listPracticeCases, loadPracticeReplay } from "@/lib/practice/queries";
 import type { BenchResult } from "@/lib/practice/types";
 import type { TreeGraph } from "@/lib/trees/graph-types";
+import { rankingAfter } from "@/lib/diagnosis";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { toDxTree } from "@/lib/trees/graph";
 import { countRows, createUser, db } from "../../support/db";
 import { resetToDemo } from "../../support/seed";
 import { useTemporaryUploads } from "../writeups/fixtures";
-import { CALLER, firstPublishedGraph, insertCase, walkOptions } from "./fixtures";
+import { CALLER, firstPublishedGraph, insertCase, SETTINGS_AT_THE_TIME, walkOptions } from "./fixtures";
 
 let dir: string;
 let graph: TreeGraph;
@@ -78,6 +81,19 @@ describe("replaying a case", () => {
       expect(r.causes.reduce((a, c) => a + c.probability, r.unlisted)).toBeCloseTo(1, 9);
     }
     expect(replay.choices.map((c) => c.slug).sort()).toEqual(graph.causes.map((c) => c.slug).sort());
+  });
+
+  it("shows the ranking each step stored (what the technician saw), not one worked out again now", async () => {
+    const replay = await loadPracticeReplay(closedId);
+    const stored = await db.select({ ranking: caseSteps.ranking }).from(caseSteps).where(eq(caseSteps.caseId, closedId)).orderBy(asc(caseSteps.seq));
+    const view = (r: StoredRanking) => r.causes.map((c) => [c.causeId, c.probability]);
+    expect(replay.rankings.slice(1).map((r) => r.causes.map((c) => [c.slug, c.probability]))).toEqual(stored.map((s) => view(s.ranking as StoredRanking)));
+    // The shop's settings today are the defaults, which rank differently from the settings of the time.
+    const dx = toDxTree(graph);
+    const key = (id: number) => graph.options.find((o) => o.id === id)!.key;
+    const nodeKey = (id: number) => graph.nodes.find((n) => n.id === id)!.key;
+    const answers = walk.steps.map((s) => ({ nodeId: nodeKey(s.nodeId), optionId: key(s.optionId) }));
+    expect(view(rankingAfter(dx, answers))).not.toEqual(view(rankingAfter(dx, answers, SETTINGS_AT_THE_TIME)));
   });
 
   it("never carries the caller's details, the case notes or the bench result", async () => {

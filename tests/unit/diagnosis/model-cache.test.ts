@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { analyseAnswers, DiagnosisError, ModelCache, type DxAnswer, type DxSettings, type DxTree } from "@/lib/diagnosis";
+import { rankingAfter, DiagnosisError, ModelCache, type DxAnswer, type DxSettings, type DxTree } from "@/lib/diagnosis";
 
 // Two questions, three causes; the evidence is chosen so weights and learned values change the result.
 const TREE: DxTree = {
@@ -31,7 +31,7 @@ describe("ModelCache", () => {
     for (let round = 0; round < 2; round++) {
       for (const settings of round === 0 ? SETTINGS : [...SETTINGS].reverse()) {
         for (const answers of ANSWER_SETS) {
-          expect(analyseAnswers(TREE, answers, settings, cache)).toEqual(analyseAnswers(TREE, answers, settings));
+          expect(rankingAfter(TREE, answers, settings, cache)).toEqual(rankingAfter(TREE, answers, settings));
         }
       }
     }
@@ -40,21 +40,21 @@ describe("ModelCache", () => {
   it("tells apart learned likelihoods that differ, even when passed as new objects", () => {
     const cache = new ModelCache(TREE);
     const answers = [{ nodeId: "q-noise", optionId: "noise-yes" }];
-    const a = analyseAnswers(TREE, answers, { likelihoods: { "noise-yes": { clutch: 0.9 } } }, cache);
-    const b = analyseAnswers(TREE, answers, { likelihoods: { "noise-yes": { clutch: 0.1 } } }, cache);
-    expect(a.scores.causes).not.toEqual(b.scores.causes);
-    expect(b).toEqual(analyseAnswers(TREE, answers, { likelihoods: { "noise-yes": { clutch: 0.1 } } }));
+    const a = rankingAfter(TREE, answers, { likelihoods: { "noise-yes": { clutch: 0.9 } } }, cache);
+    const b = rankingAfter(TREE, answers, { likelihoods: { "noise-yes": { clutch: 0.1 } } }, cache);
+    expect(a.causes).not.toEqual(b.causes);
+    expect(b).toEqual(rankingAfter(TREE, answers, { likelihoods: { "noise-yes": { clutch: 0.1 } } }));
   });
 
   it("still checks bad settings and bad answers on every call", () => {
     const cache = new ModelCache(TREE);
-    analyseAnswers(TREE, [], {}, cache);
-    expect(() => analyseAnswers(TREE, [], { unlistedShare: 2 }, cache)).toThrow(DiagnosisError);
-    expect(() => analyseAnswers(TREE, [{ nodeId: "q-none", optionId: "x" }], {}, cache)).toThrow(DiagnosisError);
+    rankingAfter(TREE, [], {}, cache);
+    expect(() => rankingAfter(TREE, [], { unlistedShare: 2 }, cache)).toThrow(DiagnosisError);
+    expect(() => rankingAfter(TREE, [{ nodeId: "q-none", optionId: "x" }], {}, cache)).toThrow(DiagnosisError);
   });
 
   it("refuses a tree it was not made for", () => {
     const cache = new ModelCache(TREE);
-    expect(() => analyseAnswers({ ...TREE }, [], {}, cache)).toThrow(/only the tree it was made for/);
+    expect(() => rankingAfter({ ...TREE }, [], {}, cache)).toThrow(/only the tree it was made for/);
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { scoreCauses } from "@/lib/diagnosis";
+import { rankingAfter, type DxAnswer } from "@/lib/diagnosis";
 import { buildReplay } from "@/lib/practice/replay";
 import { toDxTree } from "@/lib/trees/graph";
 import type { GraphNode, GraphOption, TreeGraph } from "@/lib/trees/graph-types";
@@ -37,8 +37,19 @@ const graph: TreeGraph = {
 };
 const facts = { caseId: 7, family: "Invented Gen 1", symptom: "pedals slip", treeTitle: "Pedal slip", ridingUse: "trail", callerKind: "rider" };
 
+// Each step carries the ranking the engine gave after it, as a case step stores it.
+const dx = toDxTree(graph);
+function recorded(steps: [number, number, string, string][]) {
+  const answers: DxAnswer[] = [];
+  return steps.map(([nodeId, optionId, nodeKey, optionKey]) => {
+    answers.push({ nodeId: nodeKey, optionId: optionKey });
+    return { nodeId, optionId, ranking: rankingAfter(dx, answers) };
+  });
+}
+
 describe("replaying a recorded walk", () => {
-  const replay = buildReplay(facts, graph, [{ nodeId: 1, optionId: 11 }, { nodeId: 3, optionId: 31 }, { nodeId: 4, optionId: 41 }]);
+  const walk = recorded([[1, 11, "q1", "q1-yes"], [3, 31, "q2", "q2-dk"], [4, 41, "c1", "c1-slip"]]);
+  const replay = buildReplay(facts, graph, walk, rankingAfter(dx, []));
 
   it("lists each answered question or check with its answer, in order", () => {
     expect(replay.steps.map((s) => [s.seq, s.kind, s.title, s.answer, s.dontKnow])).toEqual([
@@ -53,16 +64,14 @@ describe("replaying a recorded walk", () => {
     expect(replay.steps.map((s) => s.cautions)).toEqual([["Stop riding until the unit is checked."], [], []]);
   });
 
-  it("gives the engine's ranking before any answer and after each one", () => {
-    const dx = toDxTree(graph);
-    const answers = [{ nodeId: "q1", optionId: "q1-yes" }, { nodeId: "q2", optionId: "q2-dk" }, { nodeId: "c1", optionId: "c1-slip" }];
+  it("shows the starting ranking, then the ranking each step stored", () => {
+    const stored = [rankingAfter(dx, []), ...walk.map((s) => s.ranking)];
     expect(replay.rankings).toHaveLength(4);
     replay.rankings.forEach((r, i) => {
-      const engine = scoreCauses(dx, answers.slice(0, i));
-      expect(r.causes.map((c) => [c.slug, c.probability])).toEqual(engine.causes.map((c) => [c.causeId, c.probability]));
-      expect(r.unlisted).toBe(engine.unlisted);
+      expect(r.causes.map((c) => [c.slug, c.probability])).toEqual(stored[i].causes.map((c) => [c.causeId, c.probability]));
+      expect(r.unlisted).toBe(stored[i].unlisted);
     });
-    // A "don't know" changes nothing (DESIGN §4).
+    // A "don't know" answer carries no evidence, so the ranking stays as it was.
     expect(replay.rankings[2]).toEqual(replay.rankings[1]);
     const last = replay.rankings[3];
     expect(last.causes[0].slug).toBe("clutch");
@@ -74,6 +83,8 @@ describe("replaying a recorded walk", () => {
   });
 
   it("skips steps that do not belong to the tree version", () => {
-    expect(buildReplay(facts, graph, [{ nodeId: 99, optionId: 11 }, { nodeId: 1, optionId: 12 }]).steps.map((s) => s.answer)).toEqual(["no"]);
+    const start = rankingAfter(dx, []);
+    const steps = [{ nodeId: 99, optionId: 11, ranking: start }, { nodeId: 1, optionId: 12, ranking: rankingAfter(dx, [{ nodeId: "q1", optionId: "q1-no" }]) }];
+    expect(buildReplay(facts, graph, steps, start).steps.map((s) => s.answer)).toEqual(["no"]);
   });
 });

@@ -1,0 +1,66 @@
+import "server-only";
+import { sql } from "@/db";
+import type { CaseStatus } from "@/db/schema";
+import type { DxSettings } from "@/lib/diagnosis";
+import { learnedLikelihoodsFor } from "@/lib/review/learned";
+import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
+import { familyHistory } from "./history";
+
+/** A case as an answer, an undo or the finish needs it, with the engine settings it is scored with. */
+export interface CaseContext {
+  id: number;
+  reference: string;
+  status: CaseStatus;
+  familyId: number;
+  treeVersionId: number;
+  /** Recorded steps in order, with database ids. */
+  steps: { id: number; seq: number; nodeId: number; optionId: number }[];
+  /** The engine's settings: the shop's stored ones and the family's confirmed history. */
+  settings: DxSettings;
+  /** What the settings were worked out from; a step is stored only while these are still current. */
+  basis: { settingsHash: string | null; likelihoodMode: string };
+}
+
+interface Row {
+  id: number;
+  reference: string;
+  status: CaseStatus;
+  family_id: number;
+  tree_version_id: number;
+  created_ms: number;
+  steps: [number, number, number, number][];
+  settings: unknown;
+  settings_hash: string | null;
+  likelihood_mode: string;
+}
+
+/**
+ * The case, its steps, the shop's settings and the tree's likelihood setting (one query, no lock),
+ * then the confirmed history of the case's motor family and, for a tree set to "learned", the
+ * likelihoods learned from its closed cases. With `historyAsOfStart`, the history counts only
+ * cases closed before this one was started, as its technician's screen did.
+ */
+export async function loadCaseContext(caseId: number, options: { historyAsOfStart?: boolean } = {}): Promise<CaseContext | null> {
+  const [row] = await sql<Row[]>`
+    select c.id, c.reference, c.status, c.family_id, c.tree_version_id, (extract(epoch from c.created_at) * 1000)::float8 as created_ms,
+      coalesce((select json_agg(json_build_array(s.id, s.seq, s.node_id, s.option_id) order by s.seq)
+                from case_steps s where s.case_id = c.id), '[]'::json) as steps,
+      st.value as settings, md5(st.value::text) as settings_hash,
+      (select t.likelihood_mode from tree_versions v join trees t on t.id = v.tree_id where v.id = c.tree_version_id) as likelihood_mode
+    from cases c left join settings st on st.key = ${DIAGNOSIS_SETTINGS_KEY}
+    where c.id = ${caseId}`;
+  if (!row) return null;
+  const history = await familyHistory(row.family_id, options.historyAsOfStart ? new Date(row.created_ms) : undefined);
+  const settings = dxSettingsFor(row.settings, history);
+  if (row.likelihood_mode === "learned") settings.likelihoods = await learnedLikelihoodsFor(row.tree_version_id);
+  return {
+    id: row.id,
+    reference: row.reference,
+    status: row.status,
+    familyId: row.family_id,
+    treeVersionId: row.tree_version_id,
+    steps: row.steps.map(([id, seq, nodeId, optionId]) => ({ id, seq, nodeId, optionId })),
+    settings,
+    basis: { settingsHash: row.settings_hash, likelihoodMode: row.likelihood_mode },
+  };
+}
