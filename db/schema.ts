@@ -50,6 +50,8 @@ export const sessions = pgTable(
     id: text("id").primaryKey(),
     userId: text("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
     expiresAt: ts("expires_at").notNull(),
+    /** Sign-in time: a session ends at the absolute lifetime after it, however active. */
+    createdAt: createdAt(),
   },
   (t) => [index("sessions_user_idx").on(t.userId)],
 );
@@ -64,8 +66,27 @@ export const signInAttempts = pgTable(
     ip: text("ip"),
     at: ts("at").notNull().defaultNow(),
   },
-  (t) => [index("sign_in_attempts_email_at_idx").on(t.email, t.at)],
+  (t) => [index("sign_in_attempts_email_at_idx").on(t.email, t.at), index("sign_in_attempts_ip_at_idx").on(t.ip, t.at)],
 );
+
+export const ACCOUNT_TOKEN_PURPOSES = ["invite", "reset"] as const;
+export type AccountTokenPurpose = (typeof ACCOUNT_TOKEN_PURPOSES)[number];
+/** One-time links sent by e-mail (invitations, password resets); only the token's SHA-256 hash is stored. */
+export const accountTokens = pgTable(
+  "account_tokens",
+  {
+    id: text("id").primaryKey(),
+    userId: text("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    purpose: text("purpose").$type<AccountTokenPurpose>().notNull(),
+    expiresAt: ts("expires_at").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("account_tokens_user_idx").on(t.userId),
+    check("account_tokens_purpose_check", sql`${t.purpose} in (${inList(ACCOUNT_TOKEN_PURPOSES)})`),
+  ],
+);
+export type AccountToken = typeof accountTokens.$inferSelect;
 
 export const settings = pgTable("settings", {
   key: text("key").primaryKey(),
@@ -160,7 +181,8 @@ export const causeParts = pgTable(
 
 /* ---------- symptom trees ---------- */
 
-export const LIKELIHOOD_MODES = ["authored", "learned"] as const;
+/** "auto": learned once the published version has enough closed cases, else authored; the other two are pinned by a senior. */
+export const LIKELIHOOD_MODES = ["auto", "authored", "learned"] as const;
 export const trees = pgTable(
   "trees",
   {
@@ -169,7 +191,7 @@ export const trees = pgTable(
     symptom: text("symptom").notNull(),
     title: text("title").notNull(),
     description: text("description").notNull().default(""),
-    likelihoodMode: text("likelihood_mode").$type<(typeof LIKELIHOOD_MODES)[number]>().notNull().default("authored"),
+    likelihoodMode: text("likelihood_mode").$type<(typeof LIKELIHOOD_MODES)[number]>().notNull().default("auto"),
     archived: boolean("archived").notNull().default(false),
     createdBy: text("created_by").references(() => users.id),
     createdAt: createdAt(),

@@ -14,7 +14,7 @@ stop_on_exit
 export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-}
 start_cluster
 echo "[db:test] on 127.0.0.1:$DB_PORT"
-for name in rootbench_test rootbench_e2e; do
+for name in rootbench_test rootbench_e2e rootbench_fresh; do
   bash scripts/db.sh drop-db "$name" >/dev/null
   bash scripts/db.sh create-db "$name" >/dev/null
 done
@@ -50,9 +50,21 @@ start_bg "$results/server.log" env NODE_ENV=production DATABASE_URL="$E2E_DATABA
   node node_modules/next/dist/bin/next start -p "$E2E_PORT" -H 127.0.0.1
 export E2E_PROCESS_PIDS="${STARTED_PIDS[*]}"
 wait_for_http "http://127.0.0.1:$E2E_PORT/api/health" 90 || { tail -n 40 "$results/server.log"; exit 1; }
-E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" E2E_PROCESS_PIDS="$E2E_PROCESS_PIDS" DATABASE_URL=$E2E_DATABASE_URL E2E_SMTP_CONTROL="http://127.0.0.1:$((E2E_SMTP_PORT + 1))" \
+
+# A second server: a shop of its own (ROOTBENCH_DEMO=0) on an empty database, for the first-run test.
+pick_port E2E_FRESH_PORT $((E2E_PORT + 50))
+FRESH_DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_fresh)
+DATABASE_URL=$FRESH_DATABASE_URL npx tsx --conditions=react-server db/migrate.ts >/dev/null
+start_bg "$results/fresh-mail-worker.log" env DATABASE_URL="$FRESH_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" MAIL_POLL_MS=300 MAIL_FROM="Rootbench <shop@fresh-shop.rootbench.test>" \
+  npx tsx --conditions=react-server scripts/mail/worker.ts
+start_bg "$results/fresh-server.log" env NODE_ENV=production ROOTBENCH_DEMO=0 DATABASE_URL="$FRESH_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" APP_URL="http://127.0.0.1:$E2E_FRESH_PORT" \
+  node node_modules/next/dist/bin/next start -p "$E2E_FRESH_PORT" -H 127.0.0.1
+export E2E_PROCESS_PIDS="${STARTED_PIDS[*]}"
+wait_for_http "http://127.0.0.1:$E2E_FRESH_PORT/api/health" 90 || { tail -n 40 "$results/fresh-server.log"; exit 1; }
+
+E2E_FRESH_BASE_URL="http://127.0.0.1:$E2E_FRESH_PORT" E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" E2E_PROCESS_PIDS="$E2E_PROCESS_PIDS" DATABASE_URL=$E2E_DATABASE_URL E2E_SMTP_CONTROL="http://127.0.0.1:$((E2E_SMTP_PORT + 1))" \
   npx vitest run --config tests/e2e/vitest.config.ts \
-  --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || { tail -n 40 "$results/server.log"; exit 1; }
+  --reporter=default --reporter=json --outputFile.json="$results/e2e.json" || { tail -n 40 "$results/server.log" "$results/fresh-server.log"; exit 1; }
 
 step "two app processes behind HAProxy"
 source scripts/cluster/parts.sh

@@ -12,8 +12,8 @@ import { SuggestionText } from "./suggestion-item";
 const SHOWN = 12;
 
 /**
- * Evidence review for the tree page: where the shop's closed cases disagree with the tree's
- * evidence (DESIGN §4, learning from outcomes), with one click to write the nearest strength into the draft.
+ * Evidence review for the tree page: which likelihoods triage uses and why, and where the shop's
+ * closed cases disagree with the tree's evidence, with one click to write the proposed strength into the draft.
  */
 export async function EvidenceSuggestions({ treeId }: { treeId: number }) {
   const [user, review] = await Promise.all([currentUser(), treeReview(treeId)]);
@@ -24,23 +24,24 @@ export async function EvidenceSuggestions({ treeId }: { treeId: number }) {
     <div id="evidence-review">
     <Panel title="Evidence review">
       <div className="flex flex-col gap-4" data-testid="evidence-suggestions">
-        {editor ? (
-          <LikelihoodModeForm treeId={treeId} mode={review.likelihoodMode} action={setLikelihoodMode} />
-        ) : (
-          <p className="text-sm text-ink-soft">Triage on this tree scores with {review.likelihoodMode === "learned" ? "likelihoods learned from closed cases" : "the strengths written in the tree"}.</p>
-        )}
+        <div className="rounded-md bg-paper-deep/60 p-3 text-sm" data-testid="likelihoods-in-use">
+          <p className="font-medium">Triage on this tree scores with {review.inUse.source === "learned" ? "likelihoods learned from closed cases" : "the strengths written in the tree"}.</p>
+          <p className="text-ink-soft">{review.inUse.why}</p>
+        </div>
+        {editor ? <LikelihoodModeForm treeId={treeId} mode={review.likelihoodMode} action={setLikelihoodMode} /> : null}
         {!published ? <EmptyState title="Nothing published yet.">Suggestions come from closed cases walked on a published version.</EmptyState> : (
           <>
             <p className="text-sm text-ink-soft">
               Learned from {published.cases} closed case{published.cases === 1 ? "" : "s"} walked on version {published.versionNumber}.
-              An answer is flagged where the shop&apos;s history and the tree differ by more than 0.25 with at least 10 cases.
+              A question is flagged for a cause where its answers are at least 20 times likelier if the tree is off than if it is right
+              (a Bayes factor, which weighs the size of a difference against the number of cases behind it).
             </p>
             {review.suggestions.length === 0 ? <EmptyState title="The shop’s history agrees with the tree's evidence." /> : (
               <ul className="flex flex-col divide-y divide-ink-faint/20">
                 {review.suggestions.slice(0, SHOWN).map((s) => {
                   const inDraft = s.draftStrength === s.proposedStrength && s.currentStrength !== s.proposedStrength;
                   return (
-                    <li key={`${s.optionKey}|${s.causeSlug}`} className="flex flex-col gap-2 py-3" data-testid="suggestion">
+                    <li key={`${s.optionKey}|${s.causeSlug}`} className="flex flex-col gap-2 py-3" data-testid="suggestion" data-key={`${s.nodeKey}|${s.causeSlug}`}>
                       <SuggestionText s={s} />
                       {!editor || s.proposedStrength === s.currentStrength ? null : inDraft ? (
                         <p className="text-sm text-moss">In draft {review.draft?.number}: “{STRENGTH_LABELS[s.proposedStrength]}”. Publish the draft to use it.</p>
@@ -57,7 +58,7 @@ export async function EvidenceSuggestions({ treeId }: { treeId: number }) {
                 })}
               </ul>
             )}
-            {review.suggestions.length > SHOWN ? <p className="text-xs text-ink-faint">{review.suggestions.length - SHOWN} smaller differences not shown.</p> : null}
+            {review.suggestions.length > SHOWN ? <p className="text-xs text-ink-faint">{review.suggestions.length - SHOWN} less certain differences not shown.</p> : null}
           </>
         )}
       </div>

@@ -1,27 +1,45 @@
+import { percent as pct } from "@/lib/format";
 import type { SuggestionView } from "@/lib/review/types";
-import { proposalSentence, suggestionSentence } from "@/lib/review/words";
+import { certaintySentence, proposalSentence, strengthSentence, suggestionSentence } from "@/lib/review/words";
 
-/** One suggestion in plain words, with a small bar pair: what the tree says against what the shop saw. */
+const width = (x: number) => `${Math.round(x * 100)}%`;
+
+/**
+ * One reviewed column: the sentence, then per answer what the shop saw (count and share), what the
+ * tree says and what was learned, how sure the shop can be, and the proposed change.
+ */
 export function SuggestionText({ s, context }: { s: SuggestionView; context?: string }) {
   return (
-    <div className="flex flex-col gap-1">
+    <div className="flex flex-col gap-2">
       <p className="text-sm">{suggestionSentence(s)}</p>
-      <p className="text-xs text-ink-soft">Question: {s.nodeTitle}{context ? ` · ${context}` : ""}</p>
-      <div className="flex max-w-md flex-col gap-0.5" aria-hidden="true">
-        <Bar label="tree" value={s.authored} className="bg-ink-faint" />
-        <Bar label="shop" value={s.learned} className="bg-copper" />
-      </div>
-      <p className="text-xs text-ink-soft">{proposalSentence(s)}</p>
-    </div>
-  );
-}
-
-function Bar({ label, value, className }: { label: string; value: number; className: string }) {
-  return (
-    <div className="flex items-center gap-2 text-[11px] text-ink-faint">
-      <span className="w-8">{label}</span>
-      <span className="h-2 flex-1 rounded bg-paper-deep"><span className={`block h-2 rounded ${className}`} style={{ width: `${Math.round(value * 100)}%` }} /></span>
-      <span className="w-8 text-right font-mono">{value.toFixed(2)}</span>
+      {context ? <p className="text-xs text-ink-soft">{context}</p> : null}
+      <table className="w-full max-w-xl text-xs" data-testid="suggestion-column">
+        <thead className="text-left text-ink-faint">
+          <tr>
+            <th className="py-0.5 pr-2 font-normal">Answer</th>
+            <th className="px-2 text-right font-normal">Cases</th>
+            <th className="px-2 text-right font-normal">Tree</th>
+            <th className="px-2 text-right font-normal">Learned</th>
+            <th className="w-32 pl-2 font-normal"><span className="sr-only">Tree against learned</span></th>
+          </tr>
+        </thead>
+        <tbody>
+          {s.rows.map((r) => (
+            <tr key={r.optionKey} className={r.optionKey === s.optionKey ? "font-medium" : "text-ink-soft"}>
+              <td className="py-0.5 pr-2">{r.optionLabel}</td>
+              <td className="px-2 text-right font-mono">{r.count}</td>
+              <td className="px-2 text-right font-mono">{pct(r.authored)}</td>
+              <td className="px-2 text-right font-mono">{pct(r.learned)}</td>
+              <td className="pl-2" aria-hidden="true">
+                <span className="block h-1.5 rounded bg-paper-deep"><span className="block h-1.5 rounded bg-ink-faint" style={{ width: width(r.authored) }} /></span>
+                <span className="mt-0.5 block h-1.5 rounded bg-paper-deep"><span className="block h-1.5 rounded bg-copper" style={{ width: width(r.learned) }} /></span>
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="text-xs text-ink-soft">{certaintySentence(s.logBayesFactor)} {strengthSentence(s)}</p>
+      <p className="text-xs">{proposalSentence(s)}</p>
     </div>
   );
 }

@@ -20,9 +20,9 @@ export function AppHeader({ user }: { user: SessionUser }) {
         </nav>
         {may(user.role, "writeup:read") ? <HeaderSearch /> : null}
         <div className="flex items-center gap-3 text-sm">
-          <span data-testid="signed-in-as">
+          <Link href="/account" data-testid="signed-in-as" className="text-paper no-underline hover:underline" title="Your account">
             {user.name} · <span className="text-copper-light">{ROLE_LABELS[user.role]}</span>
-          </span>
+          </Link>
           <form action={signOut}>
             <button type="submit" className="rounded border border-paper/40 px-2 py-1 text-paper hover:bg-paper/10">Sign out</button>
           </form>

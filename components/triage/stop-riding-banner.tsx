@@ -1,6 +1,6 @@
 import type { RideAdvice } from "@/lib/triage/safety";
 
-/** DESIGN §7: the prominent warning to tell the caller to stop riding. */
+/** The prominent warning to tell the caller to stop riding. */
 export function StopRidingBanner({ advice }: { advice: RideAdvice }) {
   if (!advice.stopRiding) return null;
   return (

@@ -1,25 +1,32 @@
-import { ROLE_LABELS } from "@/lib/auth/roles";
+import { may, ROLE_LABELS } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
-import type { UserRow } from "@/lib/users/queries";
+import type { AccountState, UserRow } from "@/lib/users/queries";
 import { UserRowControls } from "./user-row-controls";
+
+const STATE_LABELS: Record<AccountState, string> = {
+  active: "active",
+  invited: "invited, no password yet",
+  "must-reset": "must choose a new password",
+  deactivated: "deactivated",
+};
 
 export function UserTable({ rows, me }: { rows: UserRow[]; me: SessionUser }) {
   return (
     <table className="w-full text-left text-sm">
       <thead className="text-xs uppercase text-ink-faint">
-        <tr><th className="py-2">Name</th><th>E-mail</th><th>Role</th><th>Status</th><th className="w-1/3">Change</th></tr>
+        <tr><th className="py-2">Name</th><th>E-mail</th><th>Role</th><th>Status</th><th className="w-2/5">Change</th></tr>
       </thead>
       <tbody className="divide-y divide-ink-faint/20">
         {rows.map((row) => (
-          <tr key={row.id} className={row.active ? "" : "text-ink-faint"}>
+          <tr key={row.id} className={row.active ? "" : "text-ink-faint"} data-testid={`user-${row.email}`}>
             <td className="py-2 font-medium">{row.name}</td>
             <td>{row.email}</td>
             <td>{ROLE_LABELS[row.role]}</td>
-            <td>{row.active ? "active" : "deactivated"}</td>
+            <td>{STATE_LABELS[row.state]}</td>
             <td>
               {row.id === me.id ? <span className="text-ink-faint">your account</span> :
                 (row.role === "admin" && me.role !== "admin") ? <span className="text-ink-faint">administrator</span> :
-                <UserRowControls row={row} canGrantAdmin={me.role === "admin"} />}
+                <UserRowControls row={row} canGrantAdmin={me.role === "admin"} canForceReset={may(me.role, "users:force-reset")} />}
             </td>
           </tr>
         ))}

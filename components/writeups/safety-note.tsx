@@ -1,4 +1,4 @@
-/** The standing caution under every write-up (DESIGN §7). */
+/** The standing caution under every write-up. */
 export function SafetyNote() {
   return (
     <aside className="rounded-md border-l-4 border-amber bg-amber-light/60 p-3 text-sm text-ink-soft" aria-label="Safety">

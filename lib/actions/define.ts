@@ -3,6 +3,8 @@ import { authorize, type Access } from "@/lib/auth/authorize";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, isAppError } from "@/lib/errors";
 import { formDataToObject, echoFields } from "./form-data";
+import { logFailure } from "@/lib/log/failure";
+import { CONTROL_CHARACTER_MESSAGE, fieldWithControlCharacter } from "@/lib/http/control-characters";
 
 export type ActionFailure = {
   ok: false;
@@ -55,7 +57,12 @@ export async function executeAction<S extends z.ZodType, R>(
   if (verdict === 401) return { ok: false, status: 401, error: "Please sign in again." };
   if (verdict === 403) return { ok: false, status: 403, error: "Your role may not do this." };
 
-  const parsed = spec.input.safeParse(raw instanceof FormData ? formDataToObject(raw) : raw);
+  const plain = raw instanceof FormData ? formDataToObject(raw) : raw;
+  const controlled = fieldWithControlCharacter(plain);
+  if (controlled) {
+    return { ok: false, status: 400, error: CONTROL_CHARACTER_MESSAGE, fieldErrors: { [controlled]: CONTROL_CHARACTER_MESSAGE }, fields };
+  }
+  const parsed = spec.input.safeParse(plain);
   if (!parsed.success) {
     const fieldErrors = fieldErrorsOf(parsed.error);
     return { ok: false, status: 400, error: "Please correct the highlighted fields.", fieldErrors, fields };
@@ -70,7 +77,7 @@ export async function executeAction<S extends z.ZodType, R>(
       return { ok: false, status: error.status, error: error.message, fieldErrors: error.fieldErrors, fields };
     }
     if (isNextControlFlow(error)) throw error;
-    console.error(`action ${spec.name} failed`, error);
+    logFailure(`action ${spec.name} failed`, error);
     return { ok: false, status: 500, error: "Something went wrong on the server; nothing was saved.", fields };
   }
 }

@@ -7,7 +7,10 @@ import { sessions, users, type Role } from "@/db/schema";
 const adapter = new DrizzlePostgreSQLAdapter(db, sessions, users);
 
 export const SESSION_COOKIE = "rb_session";
+/** Idle window: a session unused this long ends (lucia moves it on while in use). */
 export const SESSION_LIFETIME = new TimeSpan(14, "d");
+/** Absolute lifetime: however active, a session ends this long after sign-in. */
+export const SESSION_ABSOLUTE_LIFETIME = new TimeSpan(30, "d");
 
 export const lucia = new Lucia(adapter, {
   sessionExpiresIn: SESSION_LIFETIME,
@@ -16,6 +19,7 @@ export const lucia = new Lucia(adapter, {
     expires: true,
     attributes: { secure: process.env.COOKIE_SECURE === "1", sameSite: "lax" },
   },
+  getSessionAttributes: (attributes) => ({ createdAt: attributes.createdAt }),
   getUserAttributes: (attributes) => ({
     email: attributes.email,
     name: attributes.name,
@@ -28,5 +32,6 @@ declare module "lucia" {
   interface Register {
     Lucia: typeof lucia;
     DatabaseUserAttributes: { email: string; name: string; role: Role; active: boolean };
+    DatabaseSessionAttributes: { createdAt: Date };
   }
 }

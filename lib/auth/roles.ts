@@ -6,7 +6,7 @@ const STAFF: readonly Role[] = ["admin", "lead", "senior", "tech"];
 const WORKERS: readonly Role[] = ["admin", "senior", "tech"];
 const EDITORS: readonly Role[] = ["admin", "senior"];
 
-/** Who may do what (DESIGN §2). Every server entry point names one of these. */
+/** Who may do what. Every server entry point names one of these. */
 export const CAPABILITIES = {
   "home:read": ALL_ROLES,
   "case:read": STAFF,
@@ -24,6 +24,8 @@ export const CAPABILITIES = {
   "reports:export": ["admin", "lead"],
   "reports:import": ["admin", "lead"],
   "users:manage": ["admin", "lead"],
+  "users:force-reset": ["admin"],
+  "account:edit": ALL_ROLES,
   "outbox:read": ["admin", "lead"],
   "settings:edit": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;

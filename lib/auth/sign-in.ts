@@ -6,15 +6,19 @@ import { users } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { verifyAgainstNothing, verifyPassword } from "./password";
-import { createSession } from "./session";
-import { lockAddress, lockMinutesLeft, recordAttempt } from "./throttle";
+import { safeNextPath } from "./safe-next";
+import { createSession, endSessionOfToken } from "./session";
+import { lockAddress, markSucceeded, recordPendingAttempt, secondsToWait } from "./throttle";
 
 export const signInInput = z.object({
   email: z.string().trim().toLowerCase().min(1, "Enter your e-mail address.").max(200, "That address is too long.")
     .pipe(z.email("That is not an e-mail address.")),
   password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
   next: z.string().max(500).optional(),
-  ip: z.string().max(100).optional(),
+  /** Set by the server action from the request, never taken from the form. */
+  source: z.string().max(100).optional(),
+  /** The cookie token this browser held before: its session ends once the new one starts. */
+  previousToken: z.string().max(200).optional(),
 });
 export type SignInInput = z.infer<typeof signInInput>;
 
@@ -25,8 +29,9 @@ export interface SignInResult {
   next: string;
 }
 
-function safeNext(next: string | undefined): string {
-  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/";
+function waitMessage(seconds: number): string {
+  const amount = seconds < 90 ? `${seconds} second${seconds === 1 ? "" : "s"}` : `${Math.ceil(seconds / 60)} minutes`;
+  return `Too many failed attempts. Try again in ${amount}.`;
 }
 
 export const signInAction = defineAction({
@@ -34,25 +39,26 @@ export const signInAction = defineAction({
   access: "public",
   input: signInInput,
   async run(input): Promise<SignInResult> {
-    const verdict = await db.transaction(async (tx) => {
+    const source = input.source || "unknown";
+    const gate = await db.transaction(async (tx) => {
       await lockAddress(tx, input.email);
-      const minutes = await lockMinutesLeft(tx, input.email);
-      if (minutes > 0) return { kind: "locked" as const, minutes };
-      const [user] = await tx.select().from(users).where(eq(users.email, input.email)).limit(1);
-      const ok = user ? await verifyPassword(user.passwordHash, input.password) : await verifyAgainstNothing(input.password);
-      const accepted = ok && !!user && user.active;
-      await recordAttempt(tx, input.email, accepted, input.ip ?? null);
-      return accepted ? { kind: "ok" as const, userId: user.id } : { kind: "bad" as const };
+      const wait = await secondsToWait(tx, input.email, source);
+      if (wait > 0) return { wait };
+      return { wait: 0, attemptId: await recordPendingAttempt(tx, input.email, source) };
     });
-    if (verdict.kind === "locked") {
-      throw new AppError("too_many", `Too many failed attempts for this address. Try again in ${verdict.minutes} minute${verdict.minutes === 1 ? "" : "s"}.`);
-    }
-    if (verdict.kind === "bad") {
+    if (gate.attemptId === undefined) throw new AppError("too_many", waitMessage(gate.wait));
+
+    // The same work whether or not the address exists, is active or has a password yet.
+    const [user] = await db.select().from(users).where(eq(users.email, input.email)).limit(1);
+    const matches = user ? await verifyPassword(user.passwordHash, input.password) : await verifyAgainstNothing(input.password);
+    if (!matches || !user?.active) {
       throw new AppError("unauthorized", "That e-mail address and password do not match an active account.", {
         fieldErrors: { password: "Check the address and password." },
       });
     }
-    const { token, cookie } = await createSession(verdict.userId);
-    return { userId: verdict.userId, token, cookie, next: safeNext(input.next) };
+    await markSucceeded(db, gate.attemptId);
+    await endSessionOfToken(input.previousToken);
+    const { token, cookie } = await createSession(user.id);
+    return { userId: user.id, token, cookie, next: safeNextPath(input.next) };
   },
 });

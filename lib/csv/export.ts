@@ -3,6 +3,7 @@ import Papa from "papaparse";
 import { sql as pg } from "@/db";
 import { inScope, type ReportScope } from "@/lib/reports/scope";
 import { BOM } from "./lines";
+import { logFailure } from "@/lib/log/failure";
 
 /** The import's columns first (a file exported here can be edited and imported elsewhere), then the rest. */
 export const EXPORT_COLUMNS = [
@@ -15,11 +16,14 @@ type ExportRow = Record<(typeof EXPORT_COLUMNS)[number], string | number> & { id
 const BATCH = 500;
 
 /**
- * A cell a spreadsheet would run as a formula gets a leading apostrophe (OWASP, "CSV Injection").
- * Done here rather than with papaparse's escapeFormulae, whose test misses cells with a line break.
+ * Text a spreadsheet would run as a formula gets an apostrophe in front (OWASP, "CSV Injection"):
+ * at the start of the cell, and also after every character a spreadsheet may take as a field
+ * separator (comma, semicolon, tab) or a line break, optionally past spaces and a quote, because
+ * a file opened with another separator than ours splits the cell there and each piece becomes a
+ * cell of its own. Done here rather than with papaparse's escapeFormulae, which looks at the start only.
  */
 export function neutraliseFormula(cell: string): string {
-  return /^[=+\-@\t\r]/.test(cell) ? `'${cell}` : cell;
+  return cell.replace(/(^|[,;\t\r\n])([ "]*)(?=[=+\-@\t\r])/g, "$1$2'");
 }
 
 /** One batch of closed cases in scope after `afterId`, everything aggregated per case in Postgres. */
@@ -53,7 +57,7 @@ async function batchAfter(scope: ReportScope, afterId: number): Promise<ExportRo
 /**
  * The closed cases in scope with their outcomes as CSV: UTF-8 with a byte-order mark (so
  * spreadsheets read accents right), RFC 4180 quoting by papaparse, and cells that a spreadsheet
- * would run as a formula (= + - @ at the start) prefixed with an apostrophe. Streamed in batches.
+ * would run as a formula neutralised (see neutraliseFormula). Streamed in batches.
  */
 export function casesCsvStream(scope: ReportScope): ReadableStream<Uint8Array> {
   const encoder = new TextEncoder();
@@ -74,7 +78,7 @@ export function casesCsvStream(scope: ReportScope): ReadableStream<Uint8Array> {
         const body = Papa.unparse(rows.map((r) => EXPORT_COLUMNS.map((c) => neutraliseFormula(String(r[c])))), { newline: "\r\n" });
         controller.enqueue(encoder.encode(header + body + "\r\n"));
       } catch (error) {
-        console.error("CSV export failed", error);
+        logFailure("CSV export failed", error);
         controller.error(error);
       }
     },

@@ -16,7 +16,7 @@ export type {
   BenchPlan,
   TreeProblem,
   ClosedCase,
-  EvidenceSuggestion,
+  EvidenceColumn,
   LearnedLikelihoods,
   Interval,
   RankingRow,
@@ -26,7 +26,8 @@ export type {
 } from "./types";
 export { STRENGTHS } from "./types";
 export { DiagnosisError, type DiagnosisErrorCode } from "./errors";
-export { DEFAULT_WEIGHTS } from "./weights";
+export { DEFAULT_WEIGHTS, weightTable, type WeightTable } from "./weights";
+export { authoredLikelihoods, normaliseWeights } from "./likelihood";
 export { scoreCauses } from "./score";
 export { entropyBits, expectedInformationGain } from "./information";
 export { rankNextQuestions } from "./next-question";
@@ -35,6 +36,7 @@ export { rankingAfter, RANKING_SUGGESTIONS } from "./ranking";
 export { ModelCache } from "./model";
 export { benchPlan } from "./bench-plan";
 export { validateTree } from "./validate";
-export { learnLikelihoods } from "./learn";
+export { learnLikelihoods, DEFAULT_LEARNING_STRENGTH, MIN_COLUMN_CASES, REVIEW_BAYES_FACTOR } from "./learn";
+export { estimatePrecision, logMarginalLikelihood, logBayesFactorAgainstMean, posteriorMean, type CountColumn } from "./dirichlet";
 export { wilsonInterval, rankingScores, topKAccuracy, Z_95 } from "./statistics";
 export { walkPath } from "./path";

@@ -1,5 +1,6 @@
 import { requireProbability } from "./guards";
-import type { Model } from "./model";
+import { buildModel, type Model } from "./model";
+import type { DxSettings, DxTree } from "./types";
 
 /** P(o|h) of one node, with what information gain needs precomputed. */
 export interface NodeLikelihood {
@@ -86,6 +87,33 @@ export function nodeLikelihood(model: Model, n: number): NodeLikelihood {
     entropy[k] = h;
   }
   return result;
+}
+
+/**
+ * The engine's normalisation of one cause's weights over a node's outcomes ("don't know" left out):
+ * P(o|k) = λ(o,k) / Σ_o' λ(o',k), uniform when every λ is 0 (every answer rules k out).
+ */
+export function normaliseWeights(weights: readonly number[]): number[] {
+  const sum = weights.reduce((a, b) => a + b, 0);
+  return weights.map((w) => (sum > 0 ? w / sum : 1 / weights.length));
+}
+
+/**
+ * The authored P(o|k) of every outcome of every node for every cause (option id → cause id → p),
+ * from the evidence and the weight table in `settings.weights` (the shop's, or the defaults);
+ * learned likelihoods are not applied. "Don't know" options have no entry: they are neutral.
+ */
+export function authoredLikelihoods(tree: DxTree, settings: Pick<DxSettings, "weights"> = {}): Record<string, Record<string, number>> {
+  const model = buildModel(tree, { weights: settings.weights });
+  const table: Record<string, Record<string, number>> = {};
+  for (let n = 0; n < tree.nodes.length; n++) {
+    const { L } = nodeLikelihood(model, n);
+    model.outcomesOf[n].forEach((option, o) => {
+      const row: Record<string, number> = (table[option.id] = {});
+      tree.causes.forEach((cause, k) => (row[cause.id] = L[o * model.H + k]));
+    });
+  }
+  return table;
 }
 
 function normaliseColumn(L: Float64Array, m: number, H: number, k: number): void {

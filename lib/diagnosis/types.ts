@@ -111,17 +111,32 @@ export interface ClosedCase {
   confirmedCauseId: string;
 }
 
-export interface EvidenceSuggestion {
-  optionId: string;
+/** What the history says about one question-and-cause column: P(o | q, k) over the node's outcomes. */
+export interface EvidenceColumn {
+  nodeId: string;
   causeId: string;
-  authored: number;
-  learned: number;
+  /** The node's outcomes ("don't know" left out), in tree order; the arrays below follow it. */
+  optionIds: string[];
+  counts: number[];
+  /** N(q,·,k): the cases behind the column. */
   cases: number;
+  authored: number[];
+  learned: number[];
+  /** Pseudo-cases of pull toward the authored column; Infinity keeps the authored values. */
+  strength: number;
+  /** Whether the strength was fixed by the caller, estimated from this column, or from the whole tree (a thin column). */
+  strengthFrom: "fixed" | "column" | "tree";
+  /** Natural log of the Bayes factor "the answers follow another distribution" against "they follow the authored one". */
+  logBayesFactor: number;
 }
 
 export interface LearnedLikelihoods {
-  likelihoods: DxSettings["likelihoods"];
-  suggestions: EvidenceSuggestion[];
+  likelihoods: NonNullable<DxSettings["likelihoods"]>;
+  /** The strength estimated over all columns of the tree (or the fixed one), used for thin columns. */
+  treeStrength: number;
+  columns: EvidenceColumn[];
+  /** The columns whose Bayes factor reaches the review threshold, in column order. */
+  suggestions: EvidenceColumn[];
 }
 
 export interface Interval {

@@ -44,7 +44,7 @@ export async function causeCounts(scope: ReportScope): Promise<CauseCount[]> {
 
 /**
  * Pareto order (most frequent first, ties by name), each cause's share of the closed cases with
- * its Wilson 95 % interval, and the cumulative share down the list (DESIGN §4, statistics).
+ * its Wilson 95 % interval, and the cumulative share down the list (statistics).
  */
 export function paretoOf(counts: CauseCount[]): Pareto {
   const total = counts.reduce((s, c) => s + c.n, 0);

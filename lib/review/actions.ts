@@ -9,6 +9,7 @@ import { startDraftAction } from "@/lib/trees/actions";
 import { graphToDraft } from "@/lib/trees/draft";
 import { loadGraph, writeGraph } from "@/lib/trees/graph";
 import { setEvidence } from "@/lib/trees/ops";
+import { ENOUGH_HISTORY } from "./in-use";
 import { reviewVersion } from "./review";
 import { STRENGTH_LABELS } from "@/lib/trees/kinds";
 
@@ -24,7 +25,7 @@ export interface AcceptedSuggestion {
 }
 
 /**
- * Writes the strength nearest the learned likelihood into the tree's draft (started from the latest
+ * Writes the proposed strength (the one change that brings the column nearest the learned one) into the tree's draft (started from the latest
  * published version when there is none). The suggestion is recomputed here, never taken from the form.
  */
 export const acceptSuggestionAction = defineAction({
@@ -37,7 +38,7 @@ export const acceptSuggestionAction = defineAction({
     const review = await reviewVersion(input.versionId);
     const s = review.suggestions.find((x) => x.optionKey === input.optionKey && x.causeSlug === input.causeSlug);
     if (!s) throw new AppError("conflict", "The shop history no longer suggests a change to this answer; reload the page.");
-    if (s.proposedStrength === s.currentStrength) throw new AppError("conflict", "No single strength on this answer comes nearer the shop history than the current one.");
+    if (s.proposedStrength === s.currentStrength) throw new AppError("conflict", "No single change of strength brings this question nearer the shop's history.");
 
     const started = await startDraftAction.run({ treeId: input.treeId }, ctx);
     const draftId = "ok" in started ? started.data.versionId : started.versionId;
@@ -65,12 +66,18 @@ export const acceptSuggestionAction = defineAction({
   },
 });
 
+const MODE_MESSAGES: Record<(typeof LIKELIHOOD_MODES)[number], string> = {
+  auto: `Triage on this tree now scores with learned likelihoods once its published version has ${ENOUGH_HISTORY} closed cases, with the authored strengths before.`,
+  authored: "Triage on this tree now scores with the authored strengths.",
+  learned: "Triage on this tree now scores with the likelihoods learned from closed cases.",
+};
+
 export const likelihoodModeInput = z.object({
   treeId: id,
-  mode: z.enum(LIKELIHOOD_MODES, { error: "Choose authored or learned likelihoods." }),
+  mode: z.enum(LIKELIHOOD_MODES, { error: "Choose to decide from the history, or authored or learned likelihoods." }),
 });
 
-/** The tree setting that makes triage score with the authored strengths or with learned likelihoods. */
+/** The tree setting: triage scores as the history decides ("auto"), or pinned to the authored strengths or the learned likelihoods. */
 export const setLikelihoodModeAction = defineAction({
   name: "review.setLikelihoodMode",
   access: "tree:edit",
@@ -81,7 +88,7 @@ export const setLikelihoodModeAction = defineAction({
     return {
       ok: true as const,
       data: { treeId: input.treeId, mode: input.mode },
-      message: input.mode === "learned" ? "Triage on this tree now scores with the likelihoods learned from closed cases." : "Triage on this tree now scores with the authored strengths.",
+      message: MODE_MESSAGES[input.mode],
     };
   },
 });

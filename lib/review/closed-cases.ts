@@ -1,6 +1,7 @@
 import "server-only";
 import { sql as pg } from "@/db";
-import type { ClosedCase } from "@/lib/diagnosis";
+import { weightTable, type ClosedCase, type WeightTable } from "@/lib/diagnosis";
+import { DIAGNOSIS_SETTINGS_KEY, parseDiagnosisSettings } from "@/lib/triage/dx-settings";
 
 const BATCH = 5000;
 
@@ -32,4 +33,17 @@ export async function closedCasesOf(versionId: number): Promise<ClosedCase[]> {
     }
   }
   return out;
+}
+
+/** How many closed cases were walked on a version. */
+export async function closedCountOf(versionId: number): Promise<number> {
+  const [row] = await pg<{ closed: number }[]>`
+    select count(*)::int as closed from cases where tree_version_id = ${versionId} and status = 'closed'`;
+  return row.closed;
+}
+
+/** The shop's strength weights as stored in its diagnosis settings (defaults for any it has not set). */
+export async function shopWeights(): Promise<WeightTable> {
+  const [row] = await pg<{ value: unknown }[]>`select value from settings where key = ${DIAGNOSIS_SETTINGS_KEY}`;
+  return weightTable(parseDiagnosisSettings(row?.value).weights);
 }

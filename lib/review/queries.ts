@@ -1,13 +1,13 @@
 import "server-only";
 import { desc, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { trees, treeVersions, type LIKELIHOOD_MODES } from "@/db/schema";
+import { trees, treeVersions } from "@/db/schema";
 import type { Strength } from "@/lib/diagnosis";
 import { loadGraph } from "@/lib/trees/graph";
+import { likelihoodsInUse, type InUse, type LikelihoodMode } from "./in-use";
 import { reviewVersion } from "./review";
 import type { SuggestionView, VersionReview } from "./types";
 
-export type LikelihoodMode = (typeof LIKELIHOOD_MODES)[number];
 
 export interface DraftMark {
   /** The draft's strength for this answer and cause; null when the draft has no such answer. */
@@ -18,6 +18,7 @@ export interface TreeReview {
   treeId: number;
   title: string;
   likelihoodMode: LikelihoodMode;
+  inUse: InUse;
   published: VersionReview | null;
   draft: { versionId: number; number: number } | null;
   suggestions: (SuggestionView & DraftMark)[];
@@ -45,7 +46,7 @@ export async function treeReview(treeId: number): Promise<TreeReview | null> {
     return { ...s, draftStrength: option ? option.evidence[s.causeSlug] ?? "neutral" : null };
   });
   return {
-    treeId: tree.id, title: tree.title, likelihoodMode: tree.mode, published: review,
+    treeId: tree.id, title: tree.title, likelihoodMode: tree.mode, inUse: likelihoodsInUse(tree.mode, review?.cases ?? 0), published: review,
     draft: draft ? { versionId: draft.id, number: draft.number } : null, suggestions,
   };
 }
@@ -63,6 +64,6 @@ export async function reviewDigest(limit = 5): Promise<{ items: DigestItem[]; to
     review.suggestions
       .filter((s) => s.proposedStrength !== s.currentStrength && s.draftStrength !== null)
       .map((s) => ({ ...s, treeTitle: review.title, draftNumber: review.draft?.number ?? null })));
-  all.sort((a, b) => Math.abs(b.learned - b.authored) - Math.abs(a.learned - a.authored) || b.cases - a.cases);
+  all.sort((a, b) => b.logBayesFactor - a.logBayesFactor || b.cases - a.cases);
   return { items: all.slice(0, limit), total: all.length };
 }

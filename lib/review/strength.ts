@@ -1,4 +1,4 @@
-import { DEFAULT_WEIGHTS, STRENGTHS as STRENGTH_ORDER, type Strength } from "@/lib/diagnosis";
+import { STRENGTHS as STRENGTH_ORDER, normaliseWeights, type Strength, type WeightTable } from "@/lib/diagnosis";
 
 export interface OptionEvidence {
   key: string;
@@ -6,40 +6,63 @@ export interface OptionEvidence {
   strength: Strength;
 }
 
-/**
- * P(o|k) of every strength the editor could give option `optionKey` for one cause, with the node's
- * other answers (don't-know excluded) kept as authored: λ(s) / (λ(s) + Σ other λ), the engine's
- * normalisation with the default weights (as learnLikelihoods uses for the authored value).
- */
-export function likelihoodByStrength(outcomes: OptionEvidence[], optionKey: string): Record<Strength, number> {
-  const others = outcomes.filter((o) => o.key !== optionKey).reduce((s, o) => s + DEFAULT_WEIGHTS[o.strength], 0);
-  const m = outcomes.length;
-  const out = {} as Record<Strength, number>;
-  for (const s of STRENGTH_ORDER) {
-    const total = DEFAULT_WEIGHTS[s] + others;
-    // Every answer ruling the cause out is treated as neutral by the engine: uniform.
-    out[s] = total > 0 ? DEFAULT_WEIGHTS[s] / total : 1 / m;
-  }
-  return out;
+export interface StrengthEdit {
+  optionKey: string;
+  from: Strength;
+  to: Strength;
+  /** The column P(o|k) over the node's answers once the edit is made. */
+  column: number[];
 }
 
-/**
- * The strength whose normalised likelihood is nearest the learned value (ties go to the milder
- * strength). "Rules out" is only proposed for a learned value of exactly 0: a cause never seen
- * with an answer in a few dozen cases is unlikely with it, not impossible.
- */
-export function nearestStrength(outcomes: OptionEvidence[], optionKey: string, learned: number): { strength: Strength; value: number } {
-  const values = likelihoodByStrength(outcomes, optionKey);
-  let best: Strength = "neutral";
-  for (const s of STRENGTH_ORDER) {
-    if (s === "rules_out" && learned > 0) continue;
-    const d = Math.abs(values[s] - learned);
-    const bestD = Math.abs(values[best] - learned);
-    if (d < bestD - 1e-12 || (Math.abs(d - bestD) <= 1e-12 && distanceFromNeutral(s) < distanceFromNeutral(best))) best = s;
+/** The column P(o|k) the engine derives from these strengths with the shop's weights, one answer optionally changed. */
+export function columnOf(outcomes: OptionEvidence[], weights: WeightTable, change?: { optionKey: string; to: Strength }): number[] {
+  return normaliseWeights(outcomes.map((o) => weights[change && o.key === change.optionKey ? change.to : o.strength]));
+}
+
+/** Σ p log(p / q): the log loss a column q adds when answers really follow p (∞ where q is 0 and p is not). */
+function divergence(p: number[], q: number[]): number {
+  let d = 0;
+  for (let i = 0; i < p.length; i++) {
+    if (p[i] === 0) continue;
+    if (q[i] === 0) return Infinity;
+    d += p[i] * Math.log(p[i] / q[i]);
   }
-  return { strength: best, value: values[best] };
+  return d;
 }
 
 function distanceFromNeutral(s: Strength): number {
   return Math.abs(STRENGTH_ORDER.indexOf(s) - STRENGTH_ORDER.indexOf("neutral"));
+}
+
+/**
+ * The one change of one answer's strength that brings the column nearest the learned one (least
+ * divergence of the learned column from it), or null when no single change comes nearer than the
+ * column as written. Ties go to the milder strength. "Rules out" is only proposed where the learned
+ * value is 0: an answer never seen with a cause in a few dozen cases is unlikely, not impossible.
+ */
+export function bestEdit(outcomes: OptionEvidence[], learned: number[], weights: WeightTable): StrengthEdit | null {
+  let best: StrengthEdit | null = null;
+  let bestD = divergence(learned, columnOf(outcomes, weights)) - 1e-9;
+  for (const o of outcomes) {
+    for (const to of STRENGTH_ORDER) {
+      if (to === o.strength) continue;
+      const column = columnOf(outcomes, weights, { optionKey: o.key, to });
+      const d = divergence(learned, column);
+      const tie = best !== null && Math.abs(d - bestD) <= 1e-12 && distanceFromNeutral(to) < distanceFromNeutral(best.to);
+      if (d < bestD - 1e-12 || tie) {
+        best = { optionKey: o.key, from: o.strength, to, column };
+        bestD = d;
+      }
+    }
+  }
+  return best;
+}
+
+/** The proposal for a reviewed column: the best single edit, or, when none helps, the answer furthest from the history left as it is. */
+export function proposalFor(outcomes: OptionEvidence[], authored: number[], learned: number[], weights: WeightTable): StrengthEdit {
+  const edit = bestEdit(outcomes, learned, weights);
+  if (edit) return edit;
+  let far = 0;
+  for (let o = 1; o < outcomes.length; o++) if (Math.abs(learned[o] - authored[o]) > Math.abs(learned[far] - authored[far])) far = o;
+  return { optionKey: outcomes[far].key, from: outcomes[far].strength, to: outcomes[far].strength, column: authored };
 }

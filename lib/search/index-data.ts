@@ -5,6 +5,7 @@ import { indexEtag } from "./etag";
 import { markdownToPlainText } from "./plain-text";
 import type { SearchDoc, WriteupIndexPayload } from "./types";
 import { serializeIndex } from "./writeup-index";
+import { logFailure } from "@/lib/log/failure";
 
 /** Count and latest change of the published write-ups: one indexed query, cheap enough for every request. */
 export async function writeupIndexVersion(): Promise<{ count: number; maxUpdatedAt: Date | null }> {
@@ -90,5 +91,5 @@ export async function currentWriteupIndex(): Promise<{ etag: string; body: () =>
  * next reader does not wait for the index of every write-up to be built (seconds at 10,000).
  */
 export function prepareWriteupIndex(): void {
-  void currentWriteupIndex().then((index) => index.body()).catch((error: unknown) => console.error("write-up index build failed", error));
+  void currentWriteupIndex().then((index) => index.body()).catch((error: unknown) => logFailure("write-up index build failed", error));
 }

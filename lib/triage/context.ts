@@ -2,7 +2,8 @@ import "server-only";
 import { sql } from "@/db";
 import type { CaseStatus } from "@/db/schema";
 import type { DxSettings } from "@/lib/diagnosis";
-import { learnedLikelihoodsFor } from "@/lib/review/learned";
+import type { LikelihoodMode } from "@/lib/review/in-use";
+import { likelihoodsFor } from "@/lib/review/learned";
 import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
 import { familyHistory } from "./history";
 
@@ -36,8 +37,8 @@ interface Row {
 
 /**
  * The case, its steps, the shop's settings and the tree's likelihood setting (one query, no lock),
- * then the confirmed history of the case's motor family and, for a tree set to "learned", the
- * likelihoods learned from its closed cases. With `historyAsOfStart`, the history counts only
+ * then the confirmed history of the case's motor family and, where the tree's setting and history
+ * say so, the likelihoods learned from its closed cases. With `historyAsOfStart`, the history counts only
  * cases closed before this one was started, as its technician's screen did.
  */
 export async function loadCaseContext(caseId: number, options: { historyAsOfStart?: boolean } = {}): Promise<CaseContext | null> {
@@ -52,7 +53,8 @@ export async function loadCaseContext(caseId: number, options: { historyAsOfStar
   if (!row) return null;
   const history = await familyHistory(row.family_id, options.historyAsOfStart ? new Date(row.created_ms) : undefined);
   const settings = dxSettingsFor(row.settings, history);
-  if (row.likelihood_mode === "learned") settings.likelihoods = await learnedLikelihoodsFor(row.tree_version_id);
+  const learned = await likelihoodsFor(row.tree_version_id, row.likelihood_mode as LikelihoodMode);
+  if (learned) settings.likelihoods = learned;
   return {
     id: row.id,
     reference: row.reference,

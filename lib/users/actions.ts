@@ -1,48 +1,19 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db";
-import { sessions, users } from "@/db/schema";
+import { users } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
-import { hashPassword } from "@/lib/auth/password";
-import { ALL_ROLES, type Role } from "@/lib/auth/roles";
-import type { SessionUser } from "@/lib/auth/session-user";
-import { AppError, pgErrorCode } from "@/lib/errors";
+import { issueAccountToken } from "@/lib/auth/account-tokens";
+import { NO_PASSWORD } from "@/lib/auth/password";
+import { ALL_ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
+import { endSessionsOf } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { queueResetLink } from "./account-mail";
+import { assertMayAssign } from "./assign";
 
 const roleField = z.enum(ALL_ROLES as [Role, ...Role[]], { error: "Pick one of the roles." });
 const userId = z.string().trim().min(1, "No user given.").max(64);
-
-// Only an administrator may hand out or take away the administrator role.
-function assertMayAssign(actor: SessionUser, role: Role, currentRole?: Role) {
-  if ((role === "admin" || currentRole === "admin") && actor.role !== "admin") {
-    throw new AppError("forbidden", "Only an administrator may grant or change the administrator role.");
-  }
-}
-
-export const addUserInput = z.object({
-  name: z.string().trim().min(1, "Enter a name.").max(120, "Keep the name under 120 characters."),
-  email: z.string().trim().toLowerCase().max(200).pipe(z.email("That is not an e-mail address.")),
-  role: roleField,
-  password: z.string().min(10, "Use at least 10 characters.").max(200, "That password is too long."),
-});
-
-export const addUserAction = defineAction({
-  name: "users.add",
-  access: "users:manage",
-  input: addUserInput,
-  async run(input, { user }) {
-    assertMayAssign(user, input.role);
-    try {
-      const id = randomUUID();
-      await db.insert(users).values({ id, name: input.name, email: input.email, role: input.role, passwordHash: await hashPassword(input.password) });
-      return { ok: true as const, data: { id }, message: `${input.name} can now sign in as ${input.role}.` };
-    } catch (error) {
-      if (pgErrorCode(error) === "23505") throw new AppError("conflict", "Someone already uses that e-mail address.", { fieldErrors: { email: "Already in use." } });
-      throw error;
-    }
-  },
-});
 
 async function loadTarget(id: string) {
   const [target] = await db.select().from(users).where(eq(users.id, id)).limit(1);
@@ -50,6 +21,7 @@ async function loadTarget(id: string) {
   return target;
 }
 
+/** A new role takes effect at once: the person's sessions end and they sign in again under it. */
 export const changeRoleAction = defineAction({
   name: "users.changeRole",
   access: "users:manage",
@@ -58,8 +30,13 @@ export const changeRoleAction = defineAction({
     if (input.userId === user.id) throw new AppError("forbidden", "You cannot change your own role.");
     const target = await loadTarget(input.userId);
     assertMayAssign(user, input.role, target.role);
-    await db.update(users).set({ role: input.role }).where(eq(users.id, target.id));
-    return { ok: true as const, data: { id: target.id }, message: `${target.name} is now ${input.role}.` };
+    if (target.role !== input.role) {
+      await db.transaction(async (tx) => {
+        await tx.update(users).set({ role: input.role }).where(eq(users.id, target.id));
+        await endSessionsOf(tx, target.id);
+      });
+    }
+    return { ok: true as const, data: { id: target.id }, message: `${target.name} is now ${ROLE_LABELS[input.role]}.` };
   },
 });
 
@@ -73,8 +50,31 @@ export const setActiveAction = defineAction({
     assertMayAssign(user, target.role, target.role);
     await db.transaction(async (tx) => {
       await tx.update(users).set({ active: input.active }).where(eq(users.id, target.id));
-      if (!input.active) await tx.delete(sessions).where(eq(sessions.userId, target.id));
+      if (!input.active) await endSessionsOf(tx, target.id);
     });
     return { ok: true as const, data: { id: target.id }, message: `${target.name} is ${input.active ? "active again" : "deactivated"}.` };
+  },
+});
+
+/**
+ * An administrator's forced reset: the old password stops working and every session ends at
+ * once; the person gets a one-time link to choose a new password.
+ */
+export const forceResetAction = defineAction({
+  name: "users.forceReset",
+  access: "users:force-reset",
+  input: z.object({ userId }),
+  async run(input, { user }) {
+    if (input.userId === user.id) throw new AppError("forbidden", "Change your own password on your account page.");
+    const target = await loadTarget(input.userId);
+    if (!target.active) throw new AppError("conflict", "That account is deactivated; reactivate it first.");
+    if (target.passwordHash === NO_PASSWORD.invited) throw new AppError("conflict", "That person has not accepted the invitation yet; invite them again instead.");
+    await db.transaction(async (tx) => {
+      await tx.update(users).set({ passwordHash: NO_PASSWORD.reset }).where(eq(users.id, target.id));
+      await endSessionsOf(tx, target.id);
+      const token = await issueAccountToken(tx, target.id, "reset");
+      await queueResetLink(tx, target, token, "forced");
+    });
+    return { ok: true as const, data: { id: target.id }, message: `${target.name} is signed out everywhere and has been sent a link to choose a new password.` };
   },
 });

@@ -3,7 +3,7 @@ import type { SessionUser } from "@/lib/auth/session-user";
 
 type WriteupState = { status: "draft" | "published"; authorId: string | null };
 
-/** Staff read drafts (the lead reads everything); trainees read published write-ups only (DESIGN §2). */
+/** Staff read drafts (the lead reads everything); trainees read published write-ups only. */
 export function mayReadDrafts(role: Role | null | undefined): boolean {
   return may(role, "case:read");
 }

@@ -22,6 +22,8 @@ export interface LoadOptions {
   userId: string;
   /** "screen" (default): the server action the triage screen calls; "route": the JSON route. */
   via?: "screen" | "route";
+  /** Ends the run early once Date.now() passes `at` (set by the caller while the run goes on). */
+  stop?: { at: number };
 }
 
 export interface LoadResult {
@@ -61,6 +63,7 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
   const treesAvailable = await publishedTrees();
   const result: LoadResult = { requests: 0, ok: 0, failed: 0, errors: {}, latenciesMs: [], ackedStepIds: [], caseIds: [] };
   const deadline = Date.now() + options.seconds * 1000;
+  const running = () => Date.now() < deadline && Date.now() < (options.stop?.at ?? Infinity);
   const max = options.maxRequests ?? Number.POSITIVE_INFINITY;
   let counter = 0;
   const via = options.via ?? "screen";
@@ -92,7 +95,7 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
   async function walker(index: number) {
     const { token } = await createSession(options.userId);
     const cookie = `rb_session=${token}`;
-    while (Date.now() < deadline && result.requests < max) {
+    while (running() && result.requests < max) {
       const { graph, familyId } = treesAvailable[(index + counter++) % treesAvailable.length];
       const dx = toDxTree(graph);
       let created: { id: number };
@@ -107,7 +110,7 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
       }
       result.caseIds.push(created.id);
       let answers: DxAnswer[] = [];
-      while (Date.now() < deadline && result.requests < max) {
+      while (running() && result.requests < max) {
         const current = walkPath(dx, answers).current;
         if (!current) break;
         const choices = graph.options.filter((o) => o.fromKey === current);

@@ -1,4 +1,4 @@
-// Local stand-in for a mail server (DESIGN §6): keeps every message, relays none.
+// Local stand-in for a mail server: keeps every message, relays none.
 // SMTP on SMTP_PORT (default 2525); JSON control on 127.0.0.1:SMTP_CONTROL_PORT (default SMTP_PORT + 1).
 import { exitWithParents } from "../../lib/mail/exit-with-parents";
 import { startFakeSmtp } from "../../lib/mail/fake-smtp";

@@ -1,18 +1,19 @@
 "use server";
-import { cookies, headers } from "next/headers";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { ActionState } from "@/lib/actions/define";
 import { executeAction } from "@/lib/actions/define";
-import { signOutCurrent } from "@/lib/auth/session";
+import { currentToken, setSessionCookie, signOutCurrent } from "@/lib/auth/session";
 import { signInAction, type SignInResult } from "@/lib/auth/sign-in";
+import { clientSource } from "@/lib/http/client-source";
 
 export async function signIn(_prev: ActionState<SignInResult>, form: FormData): Promise<ActionState<SignInResult>> {
-  const ip = (await headers()).get("x-forwarded-for")?.split(",")[0]?.trim();
-  if (ip) form.set("ip", ip);
+  form.set("source", clientSource(await headers()) ?? "");
+  form.set("previousToken", (await currentToken()) ?? "");
   const result = await executeAction(signInAction, form, null);
   if (!result.ok) return result;
   const { cookie, next } = result.data;
-  (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
+  await setSessionCookie(cookie);
   redirect(next);
 }
 

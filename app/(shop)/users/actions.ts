@@ -2,12 +2,13 @@
 import { revalidatePath } from "next/cache";
 import type { ActionState } from "@/lib/actions/define";
 import { runAction } from "@/lib/actions/run";
-import { addUserAction, changeRoleAction, setActiveAction } from "@/lib/users/actions";
+import { changeRoleAction, forceResetAction, setActiveAction } from "@/lib/users/actions";
+import { inviteUserAction } from "@/lib/users/invite";
 
 type Result = ActionState<{ id: string }>;
 
-export async function addUser(_prev: Result, form: FormData): Promise<Result> {
-  const result = await runAction(addUserAction, form);
+export async function inviteUser(_prev: Result, form: FormData): Promise<Result> {
+  const result = await runAction(inviteUserAction, form);
   if (result.ok) revalidatePath("/users");
   return result;
 }
@@ -20,6 +21,12 @@ export async function changeRole(_prev: Result, form: FormData): Promise<Result>
 
 export async function setActive(_prev: Result, form: FormData): Promise<Result> {
   const result = await runAction(setActiveAction, form);
+  if (result.ok) revalidatePath("/users");
+  return result;
+}
+
+export async function forceReset(_prev: Result, form: FormData): Promise<Result> {
+  const result = await runAction(forceResetAction, form);
   if (result.ok) revalidatePath("/users");
   return result;
 }

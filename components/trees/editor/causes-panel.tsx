@@ -6,7 +6,7 @@ import { useEditor } from "./editor-context";
 import { NumberInput, SmallButton } from "./inputs";
 import { percent } from "@/lib/format";
 
-/** The tree's causes with the editor's prior weights (normalised to shares, DESIGN §4). */
+/** The tree's causes with the editor's prior weights (normalised to shares). */
 export function CausesPanel() {
   const { draft, edit, readOnly, catalogue, nameOf } = useEditor();
   const [pick, setPick] = useState("");

@@ -1,5 +1,5 @@
-import { DEFAULT_WEIGHTS, benchPlan, rankingAfter, walkPath } from "@/lib/diagnosis";
-import type { DxAnswer, DxOption, DxSettings, DxTree, Strength } from "@/lib/diagnosis";
+import { authoredLikelihoods, benchPlan, rankingAfter, walkPath } from "@/lib/diagnosis";
+import type { DxAnswer, DxOption, DxSettings, DxTree } from "@/lib/diagnosis";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { finalRankingOf } from "@/lib/triage/ranking-types";
 import type { Cause, Scenario } from "@/db/seed/content";
@@ -73,23 +73,16 @@ const UPGRADES: Record<string, string> = {
 
 const DAY = 86_400_000;
 
-/** P(o | cause) over a node's answerable options, as the engine defines it with default weights. */
-function optionDistribution(options: DxOption[], causeId: string): number[] {
-  const raw = options.map((o) => {
-    const w = o.evidence[causeId] ?? "neutral";
-    return typeof w === "number" ? w : DEFAULT_WEIGHTS[w as Strength];
-  });
-  const total = raw.reduce((a, b) => a + b, 0);
-  return total > 0 ? raw : options.map(() => 1);
-}
 
+/** P(o | cause) the world answers by: option id → cause id → p. */
+type AnswerTable = ReturnType<typeof authoredLikelihoods>;
 
 /** Walks the tree's default path as a caller whose unit has `trueCause` would answer. */
-function walkAsCaller(rng: Random, authored: DxTree, actual: DxTree, trueCause: string, scenario: Scenario, start: Date, settings: DxSettings, maxSteps = 40) {
+function walkAsCaller(rng: Random, authored: DxTree, actual: AnswerTable, trueCause: string, scenario: Scenario, start: Date, settings: DxSettings, maxSteps = 40) {
   const answers: DxAnswer[] = [];
   const steps: SimStep[] = [];
   const optionsOf = new Map<string, DxOption[]>();
-  for (const o of actual.options) optionsOf.set(o.nodeId, [...(optionsOf.get(o.nodeId) ?? []), o]);
+  for (const o of authored.options) optionsOf.set(o.nodeId, [...(optionsOf.get(o.nodeId) ?? []), o]);
   for (let i = 0; i < maxSteps; i++) {
     const current = walkPath(authored, answers).current;
     if (!current) break;
@@ -100,7 +93,8 @@ function walkAsCaller(rng: Random, authored: DxTree, actual: DxTree, trueCause: 
     let chosen: DxOption;
     if (dontKnow && rng.chance(scenario.dontKnowRate)) chosen = dontKnow;
     else if (rng.chance(scenario.answerNoise)) chosen = rng.pick(answerable);
-    else chosen = answerable[rng.weightedIndex(optionDistribution(answerable, trueCause))];
+    // A cause the tree does not list answers every question at random.
+    else chosen = answerable[rng.weightedIndex(answerable.map((o) => actual[o.id][trueCause] ?? 1))];
     answers.push({ nodeId: current, optionId: chosen.id });
     steps.push({ nodeKey: current, optionKey: chosen.id, at: new Date(start.getTime() + (i + 1) * 45_000), ranking: rankingAfter(authored, answers, settings) });
   }
@@ -131,7 +125,7 @@ export function simulateHistory(input: SimulationInput): SimCase[] {
   const { scenario, causes, trees, anchor } = input;
   const rng = new Random(scenario.seed);
   const causeBySlug = new Map(causes.map((c) => [c.slug, c]));
-  const actualBySlug = new Map(trees.map((t) => [t.slug, actualTree(t, scenario)]));
+  const actualBySlug = new Map(trees.map((t) => [t.slug, authoredLikelihoods(actualTree(t, scenario))]));
   const families = Object.entries(scenario.families);
   const start = new Date(anchor.getTime() - scenario.months * 30.44 * DAY);
 

@@ -31,7 +31,7 @@ const checkNodeSchema = z.strictObject({
   ...nodeBase,
   kind: z.literal("check"),
   costMinutes: z.number().positive(),
-  /** A check that needs the unit opened shows the standing caution (DESIGN §7). */
+  /** A check that needs the unit opened shows the standing caution. */
   needsOpening: z.boolean().default(false),
 });
 

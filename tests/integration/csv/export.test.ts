@@ -54,6 +54,21 @@ describe("CSV export of closed cases with outcomes", () => {
     });
   });
 
+  it("has no formula cell when a spreadsheet splits it at commas, semicolons or tabs", async () => {
+    // Notes written to be split apart: each piece after a separator starts like a formula.
+    const hostile = ["x;=cmd|' /C calc'!A0", "a,@SUM(1+1)", "tab\t+1+2", "b; -3+4", "c;\"=HYPERLINK(\"x\")", "line\n=1+1", "d;\t@x", " =lead"];
+    const [first] = await insertCases(await demoIds(), [{ family: "orvanta-tessel-2", tree: "pedal-slip", closedAt: day("2023-05-05"), primary: "owc-cage-broken", serial: "-S1;=2" }]);
+    await db.update(caseOutcomes).set({ notes: hostile.join(" | ") }).where(eq(caseOutcomes.caseId, first));
+    const { text } = await exported("from=2023-05-01&to=2023-05-31");
+    // A spreadsheet starts a formula with = + - @ (OWASP, "CSV Injection"); some skip leading spaces and quotes first.
+    const formulaLike = /^[\s"]*[=+\-@]/;
+    for (const delimiter of [",", ";", "\t"]) {
+      const cells = Papa.parse<string[]>(text.slice(1), { delimiter, skipEmptyLines: true }).data.flat();
+      expect(cells.length, delimiter).toBeGreaterThan(1);
+      expect(cells.filter((c) => formulaLike.test(c)), `parsed with ${JSON.stringify(delimiter)}`).toEqual([]);
+    }
+  });
+
   it("follows the family filter and refuses roles without export", async () => {
     const { text } = await exported("from=2025-01-01&to=2025-12-31&family=orvanta-tessel-2");
     expect(Papa.parse(text.slice(1), { skipEmptyLines: true }).data).toHaveLength(2);

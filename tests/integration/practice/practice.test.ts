@@ -77,7 +77,7 @@ describe("replaying a case", () => {
     expect(replay.steps.map((s) => ({ title: s.title, answer: s.answer }))).toEqual(expected);
     expect(replay.rankings).toHaveLength(walk.steps.length + 1);
     for (const r of replay.rankings) {
-      // The causes and the unlisted hypothesis share all the probability (DESIGN §4, posterior normalised).
+      // The causes and the unlisted hypothesis share all the probability (posterior normalised).
       expect(r.causes.reduce((a, c) => a + c.probability, r.unlisted)).toBeCloseTo(1, 9);
     }
     expect(replay.choices.map((c) => c.slug).sort()).toEqual(graph.causes.map((c) => c.slug).sort());
@@ -139,7 +139,7 @@ describe("committing to a cause", () => {
     expect(await countRows("practice_attempts")).toBe(before);
   });
 
-  it("any role may practise (DESIGN §2), each with their own history", async () => {
+  it("any role may practise, each with their own history", async () => {
     const tech = await createUser("tech");
     expect(await commit({ caseId: String(closedId), cause: walk.reached! }, tech)).toMatchObject({ ok: true });
     expect((await practiceHistory(tech.id)).attempts).toBe(1);

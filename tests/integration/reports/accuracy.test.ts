@@ -70,7 +70,7 @@ describe("tree accuracy per version on hand-built closed cases", () => {
     const s = byTree.get("pedal-slip")!.scores;
     // scikit-learn log_loss documentation: y = [spam, ham, ham, spam], p as above → 0.216162 (natural log).
     expect(s.logLoss).toBeCloseTo(0.216162, 6);
-    // Hand computation from the definitions in DESIGN §4: every confirmed cause is the top one.
+    // Hand computation from the definitions: every confirmed cause is the top one.
     expect(s.top1).toBe(1);
     // Hand computation: Σ (p−y)² per case = 0.02, 0.02, 0.08, 0.245 → mean 0.09125.
     expect(s.brier).toBeCloseTo(0.09125, 12);
@@ -81,7 +81,7 @@ describe("tree accuracy per version on hand-built closed cases", () => {
 
   it("top-1 and top-3 hit rates match scikit-learn's top_k_accuracy_score example", () => {
     const s = byTree.get("weak-assist")!.scores;
-    // scikit-learn top_k_accuracy_score documentation (recomputed, CHECKS.md): k = 1 → 0.5, k = 3 → 1.0.
+    // scikit-learn top_k_accuracy_score documentation (recomputed): k = 1 → 0.5, k = 3 → 1.0.
     expect(s.top1).toBe(0.5);
     expect(s.top3).toBe(1);
     // Hand computation: Σ (p−y)² = 0.33, 0.49, 0.69, 1.34 → 0.7125; −mean ln p = (ln 2 + ln 2.5 + ln(10/3) + ln 10)/4.
@@ -90,7 +90,7 @@ describe("tree accuracy per version on hand-built closed cases", () => {
   });
 
   it("the Brier score matches Brier's multi-category form on his example", () => {
-    // G. W. Brier (1950) as in CHECKS.md: y = [0,1,1,0], p = [0.1,0.9,0.8,0.3] → 0.075 in the form summed over categories.
+    // G. W. Brier (1950): y = [0,1,1,0], p = [0.1,0.9,0.8,0.3] → 0.075 in the form summed over categories.
     expect(byTree.get("grinding-noise")!.scores.brier).toBeCloseTo(0.075, 12);
   });
 

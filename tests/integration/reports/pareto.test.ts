@@ -68,7 +68,7 @@ describe("cause Pareto, trend, parts and repeat rate on a hand-built history", (
 
   it("counts closed cases by primary cause in Pareto order with cumulative share", async () => {
     const pareto = await causePareto(scopeF1);
-    // Hand computation from the definitions in DESIGN §4: share = n/263, cumulative = running total / 263.
+    // Hand computation from the definitions: share = n/263, cumulative = running total / 263.
     expect(pareto.total).toBe(263);
     expect(pareto.rows.map((r) => [r.key, r.n])).toEqual([[B, 100], [C, 82], [A, 81]]);
     expect(pareto.rows[0].share).toBeCloseTo(100 / 263, 12);

@@ -1,13 +1,17 @@
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { trees, treeVersions } from "@/db/schema";
+import { settings, trees, treeVersions } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import { acceptSuggestionAction, setLikelihoodModeAction } from "@/lib/review/actions";
-import { learnedLikelihoodsFor } from "@/lib/review/learned";
+import { DIAGNOSIS_SETTINGS_KEY } from "@/lib/triage/dx-settings";
+import { learnLikelihoods } from "@/lib/diagnosis";
+import { closedCasesOf } from "@/lib/review/closed-cases";
+import { ENOUGH_HISTORY } from "@/lib/review/in-use";
+import { likelihoodsFor } from "@/lib/review/learned";
 import { reviewVersion } from "@/lib/review/review";
 import { treeReview } from "@/lib/review/queries";
-import { loadGraph } from "@/lib/trees/graph";
+import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import { createRoleUsers } from "../../support/db";
 import { resetToDemo } from "../../support/seed";
 import { day, demoIds, insertCases, times, type DemoIds } from "../reports/fixtures";
@@ -40,29 +44,48 @@ describe("evidence review from closed cases", () => {
     ]);
   });
 
-  it("learns P(answer | cause) with the editor's prior and raises the suggestion", async () => {
+  it("tests the column against the tree, learns from it and proposes a change", async () => {
     const review = await reviewVersion(versionId);
     expect(review.cases).toBe(30);
-    const s = review.suggestions.find((x) => x.optionKey === OPTION && x.causeSlug === CAUSE)!;
-    // Hand computation from DESIGN §4: authored (1/3) / (1 + 1 + 1/3 + 1) = 0.1 (load, always, bumps, backwards;
-    // don't-know left out); learned (N + m·P_editor) / (N + m) = (30 + 5·0.1) / 35 with m = 5.
-    expect(s.authored).toBeCloseTo(0.1, 12);
-    expect(s.learned).toBeCloseTo(30.5 / 35, 12);
+    const s = review.suggestions.find((x) => x.nodeKey === "q-when" && x.causeSlug === CAUSE)!;
+    // Hand computation of the engine's normalisation: authored P(bumps | bolts) = (1/3) / (1 + 1 + 1/3 + 1) = 0.1
+    // (under load, always, over bumps, backwards; don't-know left out).
+    expect(s.rows.map((r) => [r.optionKey, r.count])).toEqual([["o-when-load", 0], ["o-when-always", 0], [OPTION, 30], ["o-when-backpedal", 0]]);
+    expect(s.rows.map((r) => r.authored)).toEqual([0.3, 0.3, 0.1, 0.3].map((x) => expect.closeTo(x, 12)));
+    // Bayes factor of a uniform Dirichlet against the tree: the Bayes–Laplace marginal of a sequence,
+    // (m−1)!·Π n_o! / (N+m−1)! = 3!·30!/33!, over the multinomial 0.1³⁰ (hand computation).
+    expect(s.logBayesFactor).toBeCloseTo(Math.log(6 / (31 * 32 * 33)) + 30 * Math.log(10), 9);
+    // All 30 cases on one answer: the strength chosen from the data is tiny and the learned value follows the counts.
+    expect(s.rows[2].learned).toBeGreaterThan(0.99);
     expect(s.cases).toBe(30);
+    expect(s.optionKey).toBe(OPTION);
     expect(s.currentStrength).toBe("against");
-    // Hand computation: strong gives 9 / (9 + 3) = 0.75, the nearest of the strengths to 0.871.
+    // Hand computation: strong gives 9 / (9 + 3) = 0.75, the largest share any single change gives "over bumps".
     expect(s.proposedStrength).toBe("strong");
-    expect(s.proposedValue).toBeCloseTo(0.75, 12);
+    expect(s.proposedColumn[2]).toBeCloseTo(0.75, 12);
     expect(s.optionLabel).toBe("Over bumps, even when not pedalling");
   });
 
-  it("learnedLikelihoodsFor learns from the closed cases as they are at each call", async () => {
-    const first = await learnedLikelihoodsFor(versionId);
-    expect(first![OPTION][CAUSE]).toBeCloseTo(30.5 / 35, 12);
+  it("uses the shop's strength weights for the authored side", async () => {
+    await db.insert(settings).values({ key: DIAGNOSIS_SETTINGS_KEY, value: { weights: { against: 0.5 } } });
+    try {
+      const s = (await reviewVersion(versionId)).suggestions.find((x) => x.nodeKey === "q-when" && x.causeSlug === CAUSE)!;
+      // Hand computation: 0.5 / (1 + 1 + 0.5 + 1).
+      expect(s.rows[2].authored).toBeCloseTo(0.5 / 3.5, 12);
+    } finally {
+      await db.delete(settings).where(eq(settings.key, DIAGNOSIS_SETTINGS_KEY));
+    }
+  });
+
+  it("likelihoodsFor learns from the closed cases as they are at each call", async () => {
+    const first = await likelihoodsFor(versionId, "learned");
+    expect(first![OPTION][CAUSE]).toBeGreaterThan(0.99);
+    expect(await likelihoodsFor(versionId, "authored")).toBeUndefined();
     await insertCases(ids, [{ ...bolts, answers: ["o-when-load"], closedAt: day("2025-04-02") }]);
-    const after = await learnedLikelihoodsFor(versionId);
-    // Hand computation: 31 cases now, 30 over bumps: (30 + 0.5) / 36.
-    expect(after![OPTION][CAUSE]).toBeCloseTo(30.5 / 36, 12);
+    const after = await likelihoodsFor(versionId, "learned");
+    const graph = (await loadGraph(versionId))!;
+    expect(after).toEqual(learnLikelihoods(toDxTree(graph), await closedCasesOf(versionId)).likelihoods);
+    expect(after![OPTION][CAUSE]).toBeLessThan(first![OPTION][CAUSE]);
   });
 
   it("a technician may not accept a suggestion", async () => {
@@ -90,14 +113,28 @@ describe("evidence review from closed cases", () => {
     expect(review!.suggestions.find((s) => s.optionKey === OPTION)!.draftStrength).toBe("strong");
   });
 
-  it("the tree setting switches between authored and learned likelihoods", async () => {
+  it("the tree setting: decide from the history, or pin authored or learned", async () => {
     const denied = await executeAction(setLikelihoodModeAction, { treeId: String(treeId), mode: "learned" }, users.tech);
     expect(!denied.ok && denied.status).toBe(403);
     const bad = await executeAction(setLikelihoodModeAction, { treeId: String(treeId), mode: "guessed" }, users.senior);
     expect(!bad.ok && bad.status).toBe(400);
-    const ok = await executeAction(setLikelihoodModeAction, { treeId: String(treeId), mode: "learned" }, users.senior);
+    const [fresh] = await db.select({ mode: trees.likelihoodMode }).from(trees).where(eq(trees.id, treeId));
+    expect(fresh.mode).toBe("auto");
+    const ok = await executeAction(setLikelihoodModeAction, { treeId: String(treeId), mode: "authored" }, users.senior);
     expect(ok.ok).toBe(true);
     const [row] = await db.select({ mode: trees.likelihoodMode }).from(trees).where(eq(trees.id, treeId));
-    expect(row.mode).toBe("learned");
+    expect(row.mode).toBe("authored");
+    expect((await treeReview(treeId))!.inUse).toMatchObject({ source: "authored", why: expect.stringContaining("pinned") });
+    await executeAction(setLikelihoodModeAction, { treeId: String(treeId), mode: "auto" }, users.senior);
+  });
+
+  it("left to decide, a tree scores with learned likelihoods once its published version has enough closed cases", async () => {
+    const { cases: closed } = await reviewVersion(versionId);
+    expect(closed).toBeLessThan(ENOUGH_HISTORY);
+    expect(await likelihoodsFor(versionId, "auto")).toBeUndefined();
+    expect((await treeReview(treeId))!.inUse).toMatchObject({ source: "authored", why: expect.stringContaining(`${closed} closed cases`) });
+    await insertCases(ids, times(ENOUGH_HISTORY - closed, { ...bolts, closedAt: day("2025-04-03") }));
+    expect(await likelihoodsFor(versionId, "auto")).toEqual((await reviewVersion(versionId)).likelihoods);
+    expect((await treeReview(treeId))!.inUse).toMatchObject({ source: "learned", why: expect.stringContaining(`${ENOUGH_HISTORY} closed cases`) });
   });
 });

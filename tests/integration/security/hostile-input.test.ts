@@ -30,6 +30,7 @@ function mutationsOf(sample: Record<string, unknown>): Mutation[] {
   for (const key of keys) {
     out.push({ name: `${key} as an object`, apply: (s) => ({ ...s, [key]: { $gt: "" } }) });
     out.push({ name: `${key} 200k characters`, apply: (s) => ({ ...s, [key]: HUGE }) });
+    out.push({ name: `${key} with a NUL byte`, apply: (s) => ({ ...s, [key]: `${String(s[key] ?? "")}\u0000x` }) });
     if (/id$/i.test(key)) {
       for (const bad of HOSTILE_IDS) out.push({ name: `${key} = ${JSON.stringify(bad)}`, apply: (s) => ({ ...s, [key]: bad }) });
     }
@@ -82,7 +83,7 @@ if (WRITE_ROUTES.length) describe("hostile input to every route handler that wri
       const mod = await import(path.join(ROOT, entry.file));
       const handler = mod[entry.method] as (req: unknown, ctx: unknown) => Promise<Response>;
       const fixture = entry.setup ? await entry.setup() : {};
-      for (const body of ["{not json", JSON.stringify({ payload: HUGE }), JSON.stringify([1, 2, 3])]) {
+      for (const body of ["{not json", JSON.stringify({ payload: HUGE }), JSON.stringify([1, 2, 3]), JSON.stringify({ text: "a\u0000b" })]) {
         const before = await allCounts();
         const req = request(entry.path, { method: entry.method, token: admin, headers: { "content-type": "application/json" } });
         const withBody = new Request(req.url, { method: entry.method, headers: req.headers, body });

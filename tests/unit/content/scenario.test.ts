@@ -51,7 +51,7 @@ describe("history scenario", () => {
       if (!tree) throw new Error(`no tree ${m.tree}`);
       const authored = likelihood(tree, m.option, m.cause);
       const actual = likelihood(tree, m.option, m.cause, m.actual);
-      // Well beyond the 0.25 difference at which DESIGN §4 raises an evidence review suggestion.
+      // Well beyond the 0.25 difference at which the review raises an evidence review suggestion.
       expect(Math.abs(actual - authored), `${m.tree}/${m.option}/${m.cause}`).toBeGreaterThan(0.4);
     }
   });

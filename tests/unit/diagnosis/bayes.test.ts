@@ -18,8 +18,8 @@ describe("posterior by Bayes' theorem", () => {
     const scores = scoreCauses(tree, [answer("test", "positive")], { unlistedShare: 0 });
     // Eddy 1982; Gigerenzer & Hoffrage, Psychological Review 102 (1995): posterior 0.077640.
     expect(byId(scores).disease.probability).toBeCloseTo(0.07764, 6);
-    expect(scores.causes[0].causeId).toBe("healthy"); // sorted by probability, descending (issue 3)
-    expect(scores.unlisted).toBe(0); // unlistedShare 0 disables the unlisted hypothesis (issue 3)
+    expect(scores.causes[0].causeId).toBe("healthy"); // sorted by probability, descending
+    expect(scores.unlisted).toBe(0); // unlistedShare 0 disables the unlisted hypothesis
   });
 
   it("zero likelihood rules a hypothesis out and names the answer", () => {
@@ -38,7 +38,7 @@ describe("posterior by Bayes' theorem", () => {
     });
     const answers = [answer("long", "long-yes"), answer("sweet", "sweet-yes"), answer("yellow", "yellow-yes")];
     const c = byId(scoreCauses(tree, answers, { unlistedShare: 0 }));
-    // Public naive-Bayes tutorial example, recomputed (CHECKS.md): 0.930748 / 0 / 0.069252.
+    // Public naive-Bayes tutorial example, recomputed: 0.930748 / 0 / 0.069252.
     expect(c.banana.probability).toBeCloseTo(0.930748, 6);
     expect(c.orange.probability).toBe(0);
     expect(c.other.probability).toBeCloseTo(0.069252, 6);
@@ -48,7 +48,7 @@ describe("posterior by Bayes' theorem", () => {
   });
 });
 
-describe("priors (hand computation from the definition in DESIGN §4)", () => {
+describe("priors (hand computation from the definition)", () => {
   const tree = buildTree({
     causes: { a: 3, b: 1 },
     nodes: [question("q", [{ id: "q-1" }, { id: "q-2" }])],
@@ -56,8 +56,8 @@ describe("priors (hand computation from the definition in DESIGN §4)", () => {
 
   it("without history the priors are the editor's weights, scaled by 1 − unlisted share", () => {
     const s = scoreCauses(tree, []);
-    expect(byId(s).a.probability).toBeCloseTo(0.75 * 0.95, 12); // DESIGN §4: w normalised, unlisted 0.05
-    expect(s.unlisted).toBeCloseTo(0.05, 12); // DESIGN §4 default unlisted share
+    expect(byId(s).a.probability).toBeCloseTo(0.75 * 0.95, 12); // w normalised, unlisted 0.05
+    expect(s.unlisted).toBeCloseTo(0.05, 12); // the default unlisted share
   });
 
   it("history adds counts to α·w", () => {

@@ -68,7 +68,7 @@ describe("bench plan", () => {
   it("refuses bad input", () => {
     expect(() => benchPlan([{ id: "a", probability: 0.7, costMinutes: 1 }, { id: "b", probability: 0.7, costMinutes: 1 }])).toThrow(DiagnosisError); // probabilities > 1 in total
     expect(() => benchPlan([{ id: "a", probability: 0.5, costMinutes: 0 }])).toThrow(DiagnosisError); // cost must be > 0
-    expect(() => benchPlan([{ id: "a", probability: Number.NaN, costMinutes: 3 }])).toThrow(DiagnosisError); // issue 3: NaN throws
+    expect(() => benchPlan([{ id: "a", probability: Number.NaN, costMinutes: 3 }])).toThrow(DiagnosisError); // NaN throws
     expect(benchPlan([])).toEqual({ order: [], expectedMinutes: 0 }); // definition: nothing to inspect costs nothing
   });
 });

@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { scoreCauses, suggestConclusion } from "@/lib/diagnosis";
 import { answer, buildTree, question, workshopTree } from "./fixtures";
 
-// Stop rule from DESIGN §4 ("top cause reaches 0.8 … or no remaining node has IG above 0.05 bits").
+// The stop rule ("top cause reaches 0.8 … or no remaining node has IG above 0.05 bits").
 describe("suggestConclusion", () => {
   const tree = workshopTree();
 

@@ -25,7 +25,7 @@ D14 Rain Mild High Strong No`
 const ATTRIBUTES = ["outlook", "temperature", "humidity", "wind"] as const;
 
 /**
- * As CHECKS.md maps it: the classes are two causes with prior weights 9 and 5, each attribute a
+ * Mapped onto the engine: the classes are two causes with prior weights 9 and 5, each attribute a
  * question whose options carry numeric weights equal to the class counts. The questions are
  * chained so all four are reachable for rankNextQuestions.
  */
@@ -56,7 +56,7 @@ const noUnlisted = { unlistedShare: 0 };
 describe("entropy and information gain (Mitchell 1997, Table 3.2)", () => {
   it("H([9+,5-]) of the PlayTennis set", () => {
     const h = entropyBits([9 / 14, 5 / 14]);
-    expect(Math.abs(h - 0.940286)).toBeLessThan(1e-4); // Mitchell 1997 ch. 3, exact value per CHECKS.md
+    expect(Math.abs(h - 0.940286)).toBeLessThan(1e-4); // Mitchell 1997 ch. 3, exact value recomputed
     expect(Math.abs(h - 0.94)).toBeLessThan(1e-3); // Mitchell 1997 ch. 3, printed 0.940
     expect(entropyBits([9, 5])).toBeCloseTo(h, 12); // counts are normalised first (definition)
   });
@@ -67,7 +67,7 @@ describe("entropy and information gain (Mitchell 1997, Table 3.2)", () => {
   });
 
   const cases: [string, number, number][] = [
-    // [attribute, exact value per CHECKS.md, value printed by Mitchell 1997 ch. 3]
+    // [attribute, exact value recomputed, value printed by Mitchell 1997 ch. 3]
     ["outlook", 0.24675, 0.246],
     ["humidity", 0.151836, 0.151],
     ["wind", 0.048127, 0.048],
@@ -85,7 +85,7 @@ describe("entropy and information gain (Mitchell 1997, Table 3.2)", () => {
     const ranked = rankNextQuestions(playTennisTree(), [], noUnlisted);
     // Mitchell 1997 ch. 3: Outlook has the highest gain, then Humidity, Wind, Temperature.
     expect(ranked.map((r) => r.nodeId)).toEqual(["outlook", "humidity", "wind", "temperature"]);
-    // Questions cost 1 minute by default (DESIGN §4), so gain per minute equals gain.
+    // Questions cost 1 minute by default, so gain per minute equals gain.
     expect(ranked[0].gainPerMinute).toBe(ranked[0].gainBits);
   });
 

@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { expectedInformationGain, rankNextQuestions } from "@/lib/diagnosis";
 import { answer, buildTree, question, workshopTree } from "./fixtures";
 
-// Ranking rules from DESIGN §4 "Next question" and issue 3; the tree is invented demo data.
+// The next-question ranking rules; the tree is invented demo data.
 describe("rankNextQuestions", () => {
   const tree = workshopTree();
 
@@ -10,19 +10,19 @@ describe("rankNextQuestions", () => {
     const ranked = rankNextQuestions(tree, []);
     expect(ranked.map((r) => r.nodeId).sort()).toEqual(["load", "noise", "sensor", "wet"]);
     for (const r of ranked) {
-      expect(r.gainBits).toBeCloseTo(expectedInformationGain(tree, [], r.nodeId), 12); // same quantity, DESIGN §4
+      expect(r.gainBits).toBeCloseTo(expectedInformationGain(tree, [], r.nodeId), 12); // same quantity
     }
     for (let i = 1; i < ranked.length; i++) expect(ranked[i - 1].gainPerMinute).toBeGreaterThanOrEqual(ranked[i].gainPerMinute);
   });
 
   it("divides by the check's cost; questions cost 1 minute", () => {
     const sensor = rankNextQuestions(tree, []).find((r) => r.nodeId === "sensor")!;
-    expect(sensor.gainPerMinute).toBeCloseTo(sensor.gainBits / 10, 12); // DESIGN §4: IG per minute of cost
+    expect(sensor.gainPerMinute).toBeCloseTo(sensor.gainBits / 10, 12); // IG per minute of cost
   });
 
   it("keeps only nodes reachable along the chosen edges", () => {
     const ranked = rankNextQuestions(tree, [answer("noise", "noise-grind")]);
-    expect(ranked.map((r) => r.nodeId)).toEqual(["wet"]); // issue 3: edges that agree with the answers
+    expect(ranked.map((r) => r.nodeId)).toEqual(["wet"]); // edges that agree with the answers
   });
 
   it("a node answered \"don't know\" is not suggested again", () => {

@@ -78,7 +78,7 @@ describe("engine properties", () => {
       fc.property(caseArb(anyWeight, true), ({ tree, answers, settings }) => {
         const s = unlessAllRuledOut(() => scoreCauses(tree, answers, settings));
         const total = s.causes.reduce((sum, c) => sum + c.probability, s.unlisted);
-        expect(total).toBeCloseTo(1, 12); // issue 3: probabilities plus unlisted sum to 1
+        expect(total).toBeCloseTo(1, 12); // probabilities plus unlisted sum to 1
         for (const c of s.causes) expect(c.probability >= 0 && c.probability <= 1).toBe(true);
         for (let i = 1; i < s.causes.length; i++) expect(s.causes[i - 1].probability).toBeGreaterThanOrEqual(s.causes[i].probability);
       }),
@@ -94,7 +94,7 @@ describe("engine properties", () => {
           .filter((o) => o.dontKnow && !answered.has(o.nodeId))
           .map((o) => ({ nodeId: o.nodeId, optionId: o.id }));
         const before = unlessAllRuledOut(() => scoreCauses(tree, answers, settings));
-        // DESIGN §4: "don't know" multiplies every hypothesis by the same factor.
+        // "don't know" multiplies every hypothesis by the same factor.
         expect(scoreCauses(tree, [...dontKnows, ...answers], settings)).toEqual(before);
       }),
       { numRuns: 200 },
@@ -126,7 +126,7 @@ describe("engine properties", () => {
         const p = pOf(prior);
         for (const node of tree.nodes) {
           const options = tree.options.filter((o) => o.nodeId === node.id);
-          // P(o|k) = λ(o,k) / Σ λ(o',k) and the unlisted uniform (DESIGN §4), recomputed here.
+          // P(o|k) = λ(o,k) / Σ λ(o',k) and the unlisted uniform, recomputed here.
           const lambda = (o: (typeof options)[number], causeId: string) => Number(o.evidence[causeId] ?? 1);
           const likelihood = (o: (typeof options)[number], h: number) =>
             h < tree.causes.length
@@ -138,7 +138,7 @@ describe("engine properties", () => {
             const after = pOf(scoreCauses(tree, [{ nodeId: node.id, optionId: o.id }], settings));
             expected += po * entropyBits(after);
           }
-          // DESIGN §4: IG = H(P) − Σ_o P(o)·H(P|o).
+          // IG = H(P) − Σ_o P(o)·H(P|o).
           expect(expectedInformationGain(tree, [], node.id, settings)).toBeCloseTo(entropyBits(p) - expected, 9);
         }
       }),

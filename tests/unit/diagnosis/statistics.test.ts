@@ -13,9 +13,9 @@ describe("Wilson score interval", () => {
   });
 
   it("edge cases", () => {
-    expect(wilsonInterval(0, 20).low).toBe(0); // CHECKS.md: x = 0 gives a lower bound of exactly 0
-    expect(wilsonInterval(20, 20).high).toBe(1); // CHECKS.md: x = n gives an upper bound of exactly 1
-    expect(() => wilsonInterval(0, 0)).toThrow(DiagnosisError); // CHECKS.md: n = 0 is an error, not NaN
+    expect(wilsonInterval(0, 20).low).toBe(0); // x = 0 gives a lower bound of exactly 0
+    expect(wilsonInterval(20, 20).high).toBe(1); // x = n gives an upper bound of exactly 1
+    expect(() => wilsonInterval(0, 0)).toThrow(DiagnosisError); // n = 0 is an error, not NaN
     expect(() => wilsonInterval(5, 4)).toThrow(DiagnosisError); // definition: x cannot exceed n
   });
 
@@ -41,14 +41,14 @@ describe("scores of a probabilistic ranking", () => {
       probabilities: { c0: 1 - p1, c1: p1 },
       confirmed: [0, 1, 1, 0][i] === 1 ? "c1" : "c0",
     }));
-    // Brier, Monthly Weather Review 78 (1950), multi-category form; CHECKS.md gives 0.075 (binary form 0.0375).
+    // Brier, Monthly Weather Review 78 (1950), multi-category form; 0.075 (binary form 0.0375).
     expect(rankingScores(rows).brier).toBeCloseTo(0.075, 12);
   });
 
   it("a confirmed category absent from the probabilities counts as p = 0", () => {
     const s = rankingScores([{ probabilities: { a: 0.6, b: 0.4 }, confirmed: "unlisted" }]);
     expect(s.brier).toBeCloseTo(0.36 + 0.16 + 1, 12); // Brier 1950 multi-category definition
-    expect(s.logLoss).toBeCloseTo(-Math.log(1e-6), 9); // log loss clipped at 1e-6 (issue 3)
+    expect(s.logLoss).toBeCloseTo(-Math.log(1e-6), 9); // log loss clipped at 1e-6
     expect(s.top3).toBe(0); // our documented rule: an absent or zero-probability category has no rank
   });
 
@@ -78,7 +78,7 @@ describe("scores of a probabilistic ranking", () => {
       { probabilities: { a: 1, b: 0 }, confirmed: "a" },
     ];
     const bins = rankingScores(rows).calibration;
-    expect(bins).toHaveLength(10); // DESIGN §4: ten equal bins
+    expect(bins).toHaveLength(10); // ten equal bins
     expect(bins[9]).toEqual({ from: 0.9, to: 1, n: 3, meanPredicted: (0.95 + 0.91 + 1) / 3, observed: 2 / 3 }); // definition: [0.9, 1.0] holds 1.0
     // A tie at the top is not a hit: the ranking did not single out the confirmed cause (our rule, documented).
     expect(bins[5]).toEqual({ from: 0.5, to: 0.6, n: 1, meanPredicted: 0.5, observed: 0 });
@@ -86,8 +86,8 @@ describe("scores of a probabilistic ranking", () => {
   });
 
   it("refuses empty or invalid input", () => {
-    expect(() => rankingScores([])).toThrow(DiagnosisError); // issue 3: never NaN
-    expect(() => rankingScores([{ probabilities: { a: Number.NaN }, confirmed: "a" }])).toThrow(DiagnosisError); // issue 3
+    expect(() => rankingScores([])).toThrow(DiagnosisError); // never NaN
+    expect(() => rankingScores([{ probabilities: { a: Number.NaN }, confirmed: "a" }])).toThrow(DiagnosisError);
     expect(() => topKAccuracy([{ probabilities: { a: 1 }, confirmed: "a" }], 0)).toThrow(DiagnosisError); // k ≥ 1
   });
 });

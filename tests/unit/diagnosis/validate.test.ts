@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { validateTree, type DxTree } from "@/lib/diagnosis";
 import { buildTree, causeNode, question, workshopTree } from "./fixtures";
 
-// The rules are DESIGN §4 "Tree validation" and issue 3's list of codes; each test breaks one.
+// The tree validation rules and their error codes; each test breaks one.
 function edit(change: (tree: DxTree) => void): DxTree {
   const tree = workshopTree();
   change(tree);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { likelihoodByStrength, nearestStrength } from "@/lib/review/strength";
-import { proposalSentence, suggestionSentence } from "@/lib/review/words";
+import { DEFAULT_WEIGHTS, weightTable } from "@/lib/diagnosis";
+import { bestEdit, columnOf, proposalFor } from "@/lib/review/strength";
+import { certaintySentence, proposalSentence, strengthSentence, suggestionSentence } from "@/lib/review/words";
 
 // A node with four answers; for the cause in question they are neutral, neutral, against, neutral.
 const outcomes = [
@@ -10,35 +11,56 @@ const outcomes = [
   { key: "back", strength: "neutral" as const },
 ];
 
-describe("choosing the strength nearest a learned likelihood", () => {
-  it("normalises each candidate against the node's other answers", () => {
-    const v = likelihoodByStrength(outcomes, "bumps");
-    // Hand computation from DESIGN §4 (weights 0, 1/3, 1, 3, 9; P = λ / Σλ with the other three answers at 1 each).
-    expect(v.rules_out).toBe(0);
-    expect(v.against).toBeCloseTo(1 / 3 / (1 / 3 + 3), 12);
-    expect(v.neutral).toBeCloseTo(1 / 4, 12);
-    expect(v.for).toBeCloseTo(3 / 6, 12);
-    expect(v.strong).toBeCloseTo(9 / 12, 12);
+describe("the column a set of strengths gives, and the one change nearest a learned column", () => {
+  it("normalises with the weights given, a change applied", () => {
+    // Hand computation, P = λ / Σλ with weights 0, 1/3, 1, 3, 9: (1, 1, 1/3, 1) / (10/3).
+    expect(columnOf(outcomes, DEFAULT_WEIGHTS)).toEqual([0.3, 0.3, 0.1, 0.3].map((x) => expect.closeTo(x, 12)));
+    // "bumps" strong: (1, 1, 9, 1) / 12.
+    expect(columnOf(outcomes, DEFAULT_WEIGHTS, { optionKey: "bumps", to: "strong" })[2]).toBeCloseTo(0.75, 12);
+    // The shop's weights: against at 1/2 gives (1, 1, 1/2, 1) / 3.5.
+    expect(columnOf(outcomes, weightTable({ against: 0.5 }))[2]).toBeCloseTo(0.5 / 3.5, 12);
   });
 
-  it("picks the nearest, never 'rules out' for a value above 0", () => {
-    // Hand computation: learned 0.87 is nearest strong (0.75); 0.4 nearest for (0.5) rather than neutral (0.25).
-    expect(nearestStrength(outcomes, "bumps", 0.87)).toEqual({ strength: "strong", value: 0.75 });
-    expect(nearestStrength(outcomes, "bumps", 0.4).strength).toBe("for");
-    // "load" is neutral among (1, 1/3, 1): against gives (1/3)/(2 + 2/3) = 0.125; rules out (0) is not offered for 0.03.
-    expect(nearestStrength(outcomes, "load", 0.03)).toEqual({ strength: "against", value: 0.125 });
-    expect(nearestStrength(outcomes, "load", 0).strength).toBe("rules_out");
+  it("proposes the change whose column is nearest the learned one", () => {
+    // Learned: most of the cases clicked over bumps. Hand computation: bumps → strong gives (1, 1, 9, 1)/12,
+    // the only single change that puts the bulk on bumps.
+    const edit = bestEdit(outcomes, [0.05, 0.05, 0.85, 0.05], DEFAULT_WEIGHTS)!;
+    expect(edit).toMatchObject({ optionKey: "bumps", from: "against", to: "strong" });
+    expect(edit.column[2]).toBeCloseTo(0.75, 12);
   });
 
-  it("every other answer ruling the cause out leaves the engine's uniform fallback", () => {
-    const allOut = [{ key: "a", strength: "rules_out" as const }, { key: "b", strength: "rules_out" as const }];
-    expect(likelihoodByStrength(allOut, "a")).toMatchObject({ rules_out: 0.5, strong: 1 });
+  it("proposes nothing when no single change comes nearer, and never 'rules out' for a value above 0", () => {
+    expect(bestEdit(outcomes, [0.3, 0.3, 0.1, 0.3], DEFAULT_WEIGHTS)).toBeNull();
+    const edit = bestEdit(outcomes, [0.32, 0.32, 0.01, 0.35], DEFAULT_WEIGHTS);
+    expect(edit?.to).not.toBe("rules_out");
+    expect(bestEdit(outcomes, [1 / 3, 1 / 3, 0, 1 / 3], DEFAULT_WEIGHTS)).toMatchObject({ optionKey: "bumps", to: "rules_out" });
+    // proposalFor falls back to the answer furthest from the history, unchanged.
+    expect(proposalFor(outcomes, [0.3, 0.3, 0.1, 0.3], [0.3, 0.28, 0.12, 0.3], DEFAULT_WEIGHTS)).toMatchObject({ optionKey: "bumps", from: "against", to: "against" });
+  });
+});
+
+describe("the review in plain words", () => {
+  const s = {
+    causeName: "Mounting bolts loose", nodeTitle: "When does it click?", cases: 30, optionKey: "bumps",
+    rows: [
+      { optionKey: "load", optionLabel: "Under load", count: 2, authored: 0.3, learned: 0.1, strength: "neutral" as const },
+      { optionKey: "bumps", optionLabel: "Over bumps", count: 28, authored: 0.1, learned: 0.9, strength: "against" as const },
+    ],
+    currentStrength: "against" as const, proposedStrength: "strong" as const, proposedColumn: [0.25, 0.75],
+    strength: 2.7, strengthFrom: "column" as const,
+  };
+
+  it("says what the cases did against what the tree expects, and the change", () => {
+    expect(suggestionSentence(s)).toBe("30 closed cases of “Mounting bolts loose” answered “When does it click?”; “Over bumps” came 28 times (93 %) where the tree expects 10 %.");
+    expect(proposalSentence(s)).toBe("Change “Over bumps” from “against” to “strong” (the tree would then expect 75 %).");
+    expect(strengthSentence(s)).toBe("Learned from this question's own history: the tree counts as 2.7 cases against the shop's 30.");
   });
 
-  it("says it in plain words", () => {
-    expect(suggestionSentence({ optionLabel: "Over bumps", causeName: "Mounting bolts loose", authored: 0.1, learned: 0.8714, cases: 30 }))
-      .toBe("Answer “Over bumps” → “Mounting bolts loose”: the tree says 0.10, shop history 0.87 over 30 cases.");
-    expect(proposalSentence({ currentStrength: "against", proposedStrength: "strong", proposedValue: 0.75 }))
-      .toBe("Change “against” to “strong” (the tree would then say 0.75).");
+  it("grades the Bayes factor on Kass & Raftery's scale (JASA 1995, p. 777)", () => {
+    expect(certaintySentence(Math.log(2))).toContain("weak evidence (66.7 % sure");
+    expect(certaintySentence(Math.log(10))).toContain("positive evidence");
+    expect(certaintySentence(Math.log(50))).toContain("50 times likelier if the tree is off here than if it is right: strong evidence (98.0 % sure");
+    expect(certaintySentence(Math.log(400))).toContain("very strong evidence");
+    expect(certaintySentence(80)).toContain("over a million times likelier");
   });
 });

@@ -49,7 +49,7 @@ describe("bench plan over the candidate causes", () => {
     const ps = { a: 0.5, b: 0.3, c: 0.15 };
     const plan = benchPlanFor(ranked(ps), catalogue);
     expect(plan.order).toEqual(["c", "b", "a"]); // 0.03 at 5 min, 0.03 at 10 min (cheaper first on a tie), 0.0167 per minute
-    // Expected minutes Σ c_i·(1 − Σ_{j<i} p_j), brute force over every order (CHECKS.md, inspection order).
+    // Expected minutes Σ c_i·(1 − Σ_{j<i} p_j), brute force over every order (the inspection-order expectation).
     const cost = (order: string[]) => {
       let found = 0;
       return order.reduce((sum, id) => { const m = catalogue.get(id)!.inspectMinutes * (1 - found); found += ps[id as keyof typeof ps]; return sum + m; }, 0);

@@ -9,7 +9,7 @@ import { undoStepAction } from "@/lib/triage/undo";
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
-// DESIGN §2: tech, senior and admin walk cases; the lead reads them; trainees never touch real cases.
+// tech, senior and admin walk cases; the lead reads them; trainees never touch real cases.
 const WORKERS: readonly Role[] = ["admin", "senior", "tech"];
 const STAFF: readonly Role[] = ["admin", "lead", "senior", "tech"];
 const FILE = "app/(shop)/triage/actions.ts";

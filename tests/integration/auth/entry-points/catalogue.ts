@@ -5,7 +5,7 @@ import { saveCauseAction } from "@/lib/catalogue/actions";
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
-// DESIGN §2: senior mechanics manage the cause and part catalogue; administrators may do everything.
+// senior mechanics manage the cause and part catalogue; administrators may do everything.
 const EDITORS: readonly Role[] = ["admin", "senior"];
 let counter = 0;
 

@@ -6,7 +6,7 @@ import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
 const FILE = "app/(shop)/cases/[id]/actions.ts";
-// DESIGN §2: tech, senior (and admin) record bench outcomes; reopening a closed case is for senior and admin.
+// tech, senior (and admin) record bench outcomes; reopening a closed case is for senior and admin.
 const WORKERS: readonly Role[] = ["admin", "senior", "tech"];
 const EDITORS: readonly Role[] = ["admin", "senior"];
 // The role matrix runs on an empty database: an allowed caller gets past validation to a 404.

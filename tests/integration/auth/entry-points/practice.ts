@@ -5,7 +5,7 @@ import { commitPracticeAction } from "@/lib/practice/actions";
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
-// DESIGN §2: trainees run practice cases; every other role may too (it never touches real cases).
+// trainees run practice cases; every other role may too (it never touches real cases).
 const ALL: readonly Role[] = ["admin", "lead", "senior", "tech", "trainee"];
 
 export const rows: EntryPointRows = {

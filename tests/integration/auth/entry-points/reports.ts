@@ -1,7 +1,7 @@
 import type { Role } from "@/lib/auth/roles";
 import type { EntryPointRows } from "../entry-points";
 
-// DESIGN §2: the lead (and admin) read all reports and export; the CSV import of past records is theirs too.
+// the lead (and admin) read all reports and export; the CSV import of past records is theirs too.
 const LEADS: readonly Role[] = ["admin", "lead"];
 
 export const rows: EntryPointRows = {

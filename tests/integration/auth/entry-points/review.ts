@@ -6,7 +6,7 @@ import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
 const FILE = "app/(shop)/trees/[id]/actions.ts";
-// DESIGN §2: editing trees (and so accepting evidence into a draft, and the likelihood setting) is senior and admin work.
+// editing trees (and so accepting evidence into a draft, and the likelihood setting) is senior and admin work.
 const EDITORS: readonly Role[] = ["admin", "senior"];
 
 export const rows: EntryPointRows = {

@@ -8,7 +8,7 @@ import { importTreeAction } from "@/lib/trees/import";
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
-// DESIGN §2: senior mechanics (and administrators) create, edit and publish trees; everyone reads published ones.
+// senior mechanics (and administrators) create, edit and publish trees; everyone reads published ones.
 const EDITORS: readonly Role[] = ["admin", "senior"];
 const ALL: readonly Role[] = ["admin", "lead", "senior", "tech", "trainee"];
 const FILE = "app/(shop)/trees/actions.ts";

@@ -2,7 +2,7 @@ import type { Role } from "@/lib/auth/roles";
 import type { EntryPointRows } from "../entry-points";
 
 const ALL: readonly Role[] = ["admin", "lead", "senior", "tech", "trainee"];
-// DESIGN §2: whoever drafts write-ups or works cases (tech, senior, admin) may upload photos.
+// whoever drafts write-ups or works cases (tech, senior, admin) may upload photos.
 const UPLOADERS: readonly Role[] = ["admin", "senior", "tech"];
 const SOME_ID = "0123456789abcdef0123456789abcdef";
 

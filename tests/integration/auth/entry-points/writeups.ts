@@ -6,7 +6,7 @@ import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
 const ALL: readonly Role[] = ["admin", "lead", "senior", "tech", "trainee"];
-// DESIGN §2: tech drafts write-ups; senior publishes; admin may do everything.
+// tech drafts write-ups; senior publishes; admin may do everything.
 const DRAFTERS: readonly Role[] = ["admin", "senior", "tech"];
 const PUBLISHERS: readonly Role[] = ["admin", "senior"];
 

@@ -1,0 +1,189 @@
+// What a person feels, in headless Chromium against the production build (`npm run bench perceived`):
+//  - triage: a number key pressed on a case of the generated 300-node tree with 30 answers recorded,
+//    until the new ranking is painted: first the screen's own (the engine in the browser), then the
+//    server's (the step stored and confirmed). Beside it, in the same run and interleaved, the floor:
+//    a key that only makes a round trip behind the same session check (GET /api/session) and paints
+//    its answer. Measured alone, then while 50 virtual technicians answer through the same server
+//    action in the background.
+//  - search: each keystroke typed into the write-up search at BENCH_WRITEUPS (10,000) write-ups,
+//    until the results for what has been typed are painted.
+// Budgets on a 2-core machine: answer p95 ≤ 50 ms alone and ≤ 150 ms under load; search p95 ≤ 50 ms.
+import { eq } from "drizzle-orm";
+import { chromium, type Page } from "playwright-core";
+import { db, sql } from "@/db";
+import { users } from "@/db/schema";
+import { auditSteps, runLoad } from "../load/walkers";
+import { setUpGeneratedCase, STEPS } from "./support/generated-case";
+import { COUNT, generateWriteups, removeGenerated, WORDS } from "./support/writeups";
+
+const BASE = process.env.BENCH_BASE_URL ?? "http://127.0.0.1:3200";
+const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 40);
+const LOAD_WALKERS = Number(process.env.BENCH_LOAD_WALKERS ?? 50);
+
+/**
+ * Installed in the page: times from a key's keydown to the frame after `done()` first holds,
+ * checked on every DOM change (a requestAnimationFrame then a task: the frame has been painted).
+ */
+const PAGE_HELPERS = `
+// tsx compiles this file with esbuild's keepNames, whose __name helper the page does not have.
+globalThis.__name = (f) => f;
+// Armed first, awaited after the key is pressed: window.__rbArm(...); press; await window.__rbPending.
+window.__rbArm = (key, done, marks) => { window.__rbPending = window.__rbTime(key, done, marks); window.__rbPending.catch(() => {}); };
+window.__rbTime = (key, done, marks) => new Promise((resolve, reject) => {
+  let t0 = 0;
+  const seen = {};
+  const check = () => {
+    if (!t0) return;
+    for (const [name, test] of Object.entries(marks || {})) if (!(name in seen) && test()) seen[name] = performance.now();
+    if (done()) {
+      observer.disconnect();
+      requestAnimationFrame(() => setTimeout(() => {
+        const t1 = performance.now();
+        const out = { total: t1 - t0 };
+        for (const [name, at] of Object.entries(seen)) out[name] = at - t0;
+        resolve(out);
+      }, 0));
+    }
+  };
+  const observer = new MutationObserver(check);
+  observer.observe(document.body, { subtree: true, childList: true, attributes: true, characterData: true });
+  window.addEventListener("keydown", (e) => { if (e.key === key) t0 = e.timeStamp || performance.now(); }, { capture: true, once: true });
+  setTimeout(() => { observer.disconnect(); reject(new Error("nothing painted within 10 s after " + key)); }, 10000);
+});
+// The floor: F8 makes a round trip behind the session check and paints its answer.
+window.addEventListener("keydown", async (e) => {
+  if (e.key !== "F8") return;
+  const r = await fetch("/api/session", { headers: { accept: "application/json" } });
+  await r.json();
+  let out = document.getElementById("rb-floor");
+  if (!out) { out = document.createElement("output"); out.id = "rb-floor"; document.body.append(out); }
+  out.textContent = String(Number(out.textContent || 0) + 1);
+});
+`;
+
+type Timing = { total: number; optimistic?: number };
+type Arm = (key: string, done: () => boolean, marks?: Record<string, () => boolean>) => void;
+const pending = (page: Page) => page.evaluate(() => (window as unknown as { __rbPending: Promise<Timing> }).__rbPending);
+
+async function timeAnswer(page: Page): Promise<Timing> {
+  const n = STEPS + 1;
+  // The walk follows the suggestions, so the technician picks the best suggested question first (not timed).
+  if (!(await page.getByTestId("current-question").count())) await page.getByTestId("suggestion").first().click();
+  await page.getByTestId("current-question").waitFor();
+  await page.evaluate((n) => (window as unknown as { __rbArm: Arm }).__rbArm("1",
+    () => document.querySelector(`[data-testid=trail-step][data-seq="${n}"][data-confirmed=yes]`) !== null
+      && document.querySelector("[data-testid=walk-screen]")?.getAttribute("data-pending") === "no",
+    { optimistic: () => document.querySelector(`[data-testid=trail-step][data-seq="${n}"]`) !== null }), n);
+  await page.keyboard.press("1");
+  const result = await pending(page);
+  // Back to 30 answers for the next sample (not timed).
+  await page.keyboard.press("u");
+  await page.locator(`[data-testid=trail-step][data-seq="${n}"]`).waitFor({ state: "detached" });
+  await page.locator("[data-testid=walk-screen][data-pending=no]").waitFor();
+  return result;
+}
+
+async function timeFloor(page: Page): Promise<Timing> {
+  const before = await page.evaluate(() => Number(document.getElementById("rb-floor")?.textContent ?? 0));
+  await page.evaluate((before) => (window as unknown as { __rbArm: Arm }).__rbArm("F8",
+    () => Number(document.getElementById("rb-floor")?.textContent ?? 0) > before), before);
+  await page.keyboard.press("F8");
+  return pending(page);
+}
+
+async function measureTriage(page: Page, samples: number) {
+  const answer: Timing[] = [];
+  const floor: Timing[] = [];
+  for (let i = 0; i < samples; i++) {
+    // Interleaved, so both see the same machine load; a pause as between a technician's keypresses.
+    answer.push(await timeAnswer(page));
+    await page.waitForTimeout(50);
+    floor.push(await timeFloor(page));
+    await page.waitForTimeout(50);
+  }
+  return { answer, floor };
+}
+
+async function measureSearch(page: Page): Promise<number[]> {
+  await page.goto(`${BASE}/writeups`);
+  await page.getByTestId("search-status").filter({ hasText: new RegExp(`of ${COUNT >= 1000 ? "\\d{4,}" : "\\d+"} write-ups`) }).waitFor({ timeout: 180_000 });
+  const input = page.locator("#writeup-search");
+  const times: number[] = [];
+  for (const word of WORDS.slice(0, 12)) {
+    await input.fill("");
+    await page.getByTestId("search-status").filter({ hasText: "newest first" }).waitFor();
+    await input.focus();
+    for (let k = 1; k <= word.length; k++) {
+      const typed = word.slice(0, k);
+      await page.evaluate((typed) => (window as unknown as { __rbArm: Arm }).__rbArm(typed.at(-1)!,
+        () => (document.querySelector("[data-testid=search-status]")?.textContent ?? "").includes(`for “${typed}”`)), typed);
+      await page.keyboard.press(typed.at(-1)!);
+      times.push((await pending(page)).total);
+      await page.waitForTimeout(60); // a typist's pace, roughly 150 ms a key with the measuring
+    }
+  }
+  return times;
+}
+
+const quantile = (values: number[], q: number) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+};
+const row = (label: string, values: number[], budget?: number) => {
+  const p95 = quantile(values, 0.95);
+  const verdict = budget === undefined ? "" : p95 <= budget ? `  within ${budget} ms` : `  OVER ${budget} ms`;
+  return `${label.padEnd(44)}${quantile(values, 0.5).toFixed(1).padStart(8)}${p95.toFixed(1).padStart(9)}${String(values.length).padStart(6)}${verdict}`;
+};
+
+async function main() {
+  if (!process.env.DATABASE_URL || process.env.DATABASE_URL.includes(":54329/")) {
+    throw new Error("Set DATABASE_URL to a bench database (npm run bench perceived does); refusing to fill the app database.");
+  }
+  const { token, caseId } = await setUpGeneratedCase();
+  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.role, "tech")).limit(1);
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium", headless: true,
+    args: ["--headless", "--disable-gpu", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-sandbox"],
+  });
+  try {
+    const context = await browser.newContext({ viewport: { width: 1360, height: 900 } });
+    await context.addCookies([{ name: "rb_session", value: token, url: BASE }]);
+    await context.addInitScript({ content: PAGE_HELPERS });
+    const page = await context.newPage();
+    await page.goto(`${BASE}/triage/${caseId}`);
+    await page.locator(`[data-testid=trail-step][data-seq="${STEPS}"]`).waitFor();
+    await measureTriage(page, 5); // warm-up: the server's and the browser's first runs
+    const alone = await measureTriage(page, SAMPLES);
+
+    // The same again while 50 technicians answer through the screen's server action.
+    const stop = { at: Date.now() + 600_000 };
+    const load = runLoad({ baseUrl: BASE, walkers: LOAD_WALKERS, seconds: 600, userId: tech.id, stop });
+    await page.waitForTimeout(5000); // let the walkers get going
+    const loaded = await measureTriage(page, SAMPLES).finally(() => { stop.at = 0; });
+    const background = await load;
+    const audit = await auditSteps(background);
+
+    await generateWriteups();
+    const search = await measureSearch(page);
+
+    console.log(`\nperceived speed, Chromium against the production build; ${STEPS} answers recorded on a 300-node tree; ${SAMPLES} samples each`);
+    console.log(`${"".padEnd(44)}${"median".padStart(8)}${"p95".padStart(9)}${"n".padStart(6)}   (ms, keydown to the frame painted)`);
+    console.log(row("answer: ranking painted, screen's own", alone.answer.map((t) => t.optimistic ?? t.total)));
+    console.log(row("answer: server's ranking painted", alone.answer.map((t) => t.total), 50));
+    console.log(row("floor: no-op round trip, same session check", alone.floor.map((t) => t.total)));
+    console.log(row(`under load: screen's own`, loaded.answer.map((t) => t.optimistic ?? t.total)));
+    console.log(row(`under load: server's ranking painted`, loaded.answer.map((t) => t.total), 150));
+    console.log(row(`under load: floor`, loaded.floor.map((t) => t.total)));
+    console.log(`  background: ${LOAD_WALKERS} technicians, ${background.ok} answers stored (${background.failed} failed ${JSON.stringify(background.errors)}), median ${quantile(background.latenciesMs, 0.5).toFixed(1)} ms, p95 ${quantile(background.latenciesMs, 0.95).toFixed(1)} ms; steps missing ${audit.missing}`);
+    console.log(row(`search: keystroke to results painted (${COUNT} write-ups)`, search, 50));
+  } finally {
+    await browser.close();
+    await removeGenerated();
+    await sql.end({ timeout: 5 });
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exitCode = 1;
+});
