@@ -558,6 +558,11 @@ export const mailOutbox = pgTable(
     lastError: text("last_error"),
     createdAt: createdAt(),
     sentAt: ts("sent_at"),
+    // A worker's claim: held until claimed_until on the database clock, released when it records the outcome.
+    claimToken: text("claim_token"),
+    claimedUntil: ts("claimed_until"),
+    // Fixed before the first send, so a resend after an unknown outcome carries the same Message-ID.
+    messageId: text("message_id"),
   },
   (t) => [
     index("mail_outbox_due_idx").on(t.status, t.nextAttemptAt),
@@ -722,3 +727,15 @@ export const benchFindings = pgTable(
   ],
 );
 export type BenchFinding = typeof benchFindings.$inferSelect;
+
+/* ---------- secrets shared by every app process ---------- */
+
+/**
+ * Keys the app makes for itself when the environment gives none (e.g. the CSV import signing
+ * key): made once by whichever process needs it first, then the same for every process.
+ */
+export const appSecrets = pgTable("app_secrets", {
+  name: text("name").primaryKey(),
+  value: text("value").notNull(),
+  createdAt: createdAt(),
+});

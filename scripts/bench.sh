@@ -27,19 +27,18 @@ done
 [ ${#served[@]} -eq 0 ] && exit 0
 
 ensure_chromium
-export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-54339}
-bash scripts/db.sh start >/dev/null
+stop_on_exit
+export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-}
+start_cluster
 bash scripts/db.sh drop-db rootbench_bench >/dev/null
 bash scripts/db.sh create-db rootbench_bench >/dev/null
 export DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_bench)
 npx tsx --conditions=react-server db/migrate.ts >/dev/null
 npx tsx --conditions=react-server db/seed/index.ts >/dev/null
 ensure_build
-export BENCH_PORT=${BENCH_PORT:-3200}
+pick_port BENCH_PORT 3200
 export BENCH_BASE_URL="http://127.0.0.1:$BENCH_PORT"
-NODE_ENV=production node node_modules/next/dist/bin/next start -p "$BENCH_PORT" -H 127.0.0.1 >/tmp/rootbench-bench-server.log 2>&1 &
-server=$!
-trap 'kill $server 2>/dev/null || true' EXIT
+start_bg /tmp/rootbench-bench-server.log env NODE_ENV=production node node_modules/next/dist/bin/next start -p "$BENCH_PORT" -H 127.0.0.1
 wait_for_http "$BENCH_BASE_URL/api/health" 90
 
 for name in "${served[@]}"; do run_bench "$name"; done

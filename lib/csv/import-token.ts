@@ -1,21 +1,16 @@
 import "server-only";
-import { createHash, createHmac, randomBytes, timingSafeEqual } from "node:crypto";
+import { createHash, createHmac, timingSafeEqual } from "node:crypto";
+import { sharedSecret } from "@/lib/secrets";
 
 /**
  * The preview → confirm hand-over. The server keeps no preview state: the preview answers with a
  * token signing (user, SHA-256 of the file, valid and skipped counts, expiry); the confirm sends the
  * same file back with the token, and the server re-checks every row before importing. The key is
- * IMPORT_SIGNING_KEY when set (needed when several app processes serve one shop), else a random key
- * per process, so a preview does not survive a restart.
+ * IMPORT_SIGNING_KEY when set, else one the app keeps in PostgreSQL, so a preview made through one
+ * app process can be confirmed through another, and survives a restart.
  */
 const TOKEN_MINUTES = 30;
-const holder = globalThis as unknown as { rootbenchImportKey?: Buffer };
-
-function key(): Buffer {
-  const configured = process.env.IMPORT_SIGNING_KEY;
-  if (configured) return Buffer.from(configured, "utf8");
-  return (holder.rootbenchImportKey ??= randomBytes(32));
-}
+const key = () => sharedSecret("csv-import-signing", "IMPORT_SIGNING_KEY");
 
 export interface ImportClaim {
   userId: string;
@@ -27,18 +22,18 @@ export interface ImportClaim {
 
 export const fileDigest = (bytes: Uint8Array) => createHash("sha256").update(bytes).digest("hex");
 
-const mac = (payload: string) => createHmac("sha256", key()).update(payload).digest("base64url");
+const mac = async (payload: string) => createHmac("sha256", await key()).update(payload).digest("base64url");
 
-export function signImport(claim: Omit<ImportClaim, "expires">, now = Date.now()): string {
+export async function signImport(claim: Omit<ImportClaim, "expires">, now = Date.now()): Promise<string> {
   const payload = Buffer.from(JSON.stringify({ ...claim, expires: now + TOKEN_MINUTES * 60_000 })).toString("base64url");
-  return `${payload}.${mac(payload)}`;
+  return `${payload}.${await mac(payload)}`;
 }
 
 /** The claim, or a reason the token cannot be used. */
-export function verifyImport(token: string, now = Date.now()): ImportClaim | string {
+export async function verifyImport(token: string, now = Date.now()): Promise<ImportClaim | string> {
   const [payload, signature, extra] = token.split(".");
   if (!payload || !signature || extra !== undefined || token.length > 1000) return "The confirmation does not belong to a preview; check the file again.";
-  const expected = Buffer.from(mac(payload));
+  const expected = Buffer.from(await mac(payload));
   const given = Buffer.from(signature);
   if (expected.length !== given.length || !timingSafeEqual(expected, given)) return "The confirmation does not belong to a preview; check the file again.";
   const claim = JSON.parse(Buffer.from(payload, "base64url").toString("utf8")) as ImportClaim;

@@ -27,14 +27,14 @@ export async function previewImport(upload: UploadedCsv, user: SessionUser): Pro
   return {
     fileName: upload.name, total: check.total, valid, skipped: check.skipped,
     problems: check.problems.slice(0, PROBLEMS_SHOWN), problemCount: check.problems.length, unusedColumns: check.unusedColumns,
-    token: valid > 0 ? signImport({ userId: user.id, sha256: fileDigest(upload.bytes), valid, skipped: check.skipped }) : null,
+    token: valid > 0 ? await signImport({ userId: user.id, sha256: fileDigest(upload.bytes), valid, skipped: check.skipped }) : null,
   };
 }
 
 /** The explicit confirmation: the same file, its preview token, and the counts the user agreed to. */
 export async function confirmImport(upload: UploadedCsv, user: SessionUser) {
   const token = upload.form.get("token");
-  const claim = typeof token === "string" ? verifyImport(token) : "Check the file first; the import needs its preview.";
+  const claim = typeof token === "string" ? await verifyImport(token) : "Check the file first; the import needs its preview.";
   if (typeof claim === "string") throw new AppError("bad_request", claim);
   if (claim.userId !== user.id) throw new AppError("bad_request", "This preview was made by someone else; check the file yourself first.");
   if (claim.sha256 !== fileDigest(upload.bytes)) throw new AppError("conflict", "The file differs from the one checked in the preview. Nothing was imported; check it again.");

@@ -53,12 +53,19 @@ export async function outboxMessage(id: number): Promise<(OutboxMessage & { case
   return row ? { ...row.message, caseReference: row.caseReference } : null;
 }
 
-/** Puts a failed or waiting message back at the front of the queue for one more try. */
+/**
+ * Puts a failed or waiting message back at the front of the queue for one more try. A message a
+ * worker holds (its send may be under way right now) is left to that worker, so it cannot go twice.
+ */
 export async function retryNow(id: number): Promise<void> {
-  const rows = await db.update(mailOutbox).set({ status: "queued", nextAttemptAt: new Date() })
-    .where(and(eq(mailOutbox.id, id), dsql`${mailOutbox.status} <> 'sent'`)).returning({ id: mailOutbox.id });
+  const rows = await db.update(mailOutbox).set({ status: "queued", nextAttemptAt: dsql`now()` })
+    .where(and(eq(mailOutbox.id, id), dsql`${mailOutbox.status} <> 'sent'`,
+      dsql`(${mailOutbox.claimedUntil} is null or ${mailOutbox.claimedUntil} <= now())`))
+    .returning({ id: mailOutbox.id });
   if (rows.length === 0) {
     const exists = await outboxMessage(id);
-    throw exists ? new AppError("conflict", "That message has been sent already.") : new AppError("not_found", "That message does not exist.");
+    if (!exists) throw new AppError("not_found", "That message does not exist.");
+    if (exists.status === "sent") throw new AppError("conflict", "That message has been sent already.");
+    throw new AppError("conflict", "The mail worker is sending that message right now; look again in a minute.");
   }
 }

@@ -1,7 +1,7 @@
 import { randomBytes } from "node:crypto";
-import { mkdir, readFile, rename, rm, writeFile } from "node:fs/promises";
+import { mkdir, readdir, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
 import path from "node:path";
-import { assertValidKey, type BlobStore } from "./store";
+import { assertValidKey, type BlobStore, type StoredObject } from "./store";
 
 /** Files under one root folder; writes go to a temporary name first so a reader never sees half a file. */
 export class LocalDiskStore implements BlobStore {
@@ -36,5 +36,21 @@ export class LocalDiskStore implements BlobStore {
 
   async delete(key: string): Promise<void> {
     await rm(this.fileOf(key), { force: true });
+  }
+
+  async *list(): AsyncIterable<StoredObject> {
+    let entries;
+    try {
+      entries = await readdir(this.root, { recursive: true, withFileTypes: true });
+    } catch (error) {
+      if (typeof error === "object" && error && "code" in error && error.code === "ENOENT") return;
+      throw error;
+    }
+    for (const entry of entries) {
+      if (!entry.isFile()) continue;
+      const file = path.join(entry.parentPath, entry.name);
+      const key = path.relative(this.root, file).split(path.sep).join("/");
+      yield { key, modifiedAt: (await stat(file)).mtime };
+    }
   }
 }

@@ -1,6 +1,6 @@
 /**
- * Where uploaded bytes live, by key. The local disk is the default; an S3-compatible store can
- * implement the same three calls (PutObject, GetObject, DeleteObject) without the callers changing.
+ * Where uploaded bytes live, by key: the local disk (one machine) or any S3-compatible store
+ * (several app processes share one bucket). Callers never see which.
  */
 export interface BlobStore {
   put(key: string, data: Uint8Array, meta?: { contentType?: string }): Promise<void>;
@@ -8,6 +8,13 @@ export interface BlobStore {
   get(key: string): Promise<Buffer | null>;
   /** Removes the key; removing a key that does not exist is not an error. */
   delete(key: string): Promise<void>;
+  /** Every stored key with the time it was written (for the orphan sweep and backups). */
+  list(): AsyncIterable<StoredObject>;
+}
+
+export interface StoredObject {
+  key: string;
+  modifiedAt: Date;
 }
 
 // Keys are slash-separated segments of safe characters, so no key can climb out of the store's root.

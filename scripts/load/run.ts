@@ -1,11 +1,12 @@
 // npm run load: 50 technicians walking cases for 60 s against a production server, then /api/health
 // under the same concurrency, then the faults: PostgreSQL restarted mid-load, and the SMTP server
 // down for a minute while mail is queued. Talks only to 127.0.0.1; every loop is bounded.
-import { execFileSync } from "node:child_process";
+import { execFileSync, spawn } from "node:child_process";
+import { openSync, writeFileSync } from "node:fs";
 import { and, count, eq, inArray } from "drizzle-orm";
 import { db, sql } from "@/db";
 import { mailOutbox, users } from "@/db/schema";
-import { deliverDue } from "@/lib/mail/deliver";
+import { outboxDeliverer } from "@/lib/mail/deliver";
 import { startFakeSmtp } from "@/lib/mail/fake-smtp";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { smtpTransport } from "@/lib/mail/transport";
@@ -37,8 +38,41 @@ async function healthUnderLoad(secondsToRun: number) {
   return { latencies, errors, seconds: secondsToRun };
 }
 
+/**
+ * Cluster mode (npm run load cluster): the walkers go through HAProxy to two app processes; at
+ * LOAD_KILL_AFTER seconds (default 20) the first process is killed with SIGKILL and started again
+ * on its port. Every step a walker was told was stored must be in the database exactly once.
+ */
+async function clusterRun(techId: string) {
+  const killPid = Number(process.env.LOAD_KILL_PID);
+  const killPort = process.env.LOAD_KILL_PORT!;
+  const killAfter = Number(process.env.LOAD_KILL_AFTER ?? 20);
+  console.log(`load (cluster): ${walkers} technicians for ${seconds} s through ${baseUrl}; app process ${killPid} killed at ${killAfter} s and restarted`);
+  const killer = setTimeout(() => {
+    process.kill(-killPid, "SIGKILL");
+    const log = openSync(`${process.env.LOAD_LOGS}/app-1-restarted.log`, "a");
+    const restarted = spawn("node", ["node_modules/next/dist/bin/next", "start", "-p", killPort, "-H", "127.0.0.1"], {
+      detached: true, stdio: ["ignore", log, log], env: { ...process.env, NODE_ENV: "production" },
+    });
+    writeFileSync(`${process.env.LOAD_LOGS}/restarted.pid`, String(restarted.pid));
+    restarted.unref();
+    console.log(`  ${new Date().toISOString()} killed ${killPid}, restarted as ${restarted.pid}`);
+  }, killAfter * 1000);
+  const run = await runLoad({ baseUrl, walkers, seconds, userId: techId });
+  clearTimeout(killer);
+  const audit = await auditSteps(run);
+  const dupes = await sql`select case_id, seq from case_steps where case_id = any(${run.caseIds}) group by 1, 2 having count(*) > 1`;
+  console.log("\nphase        requests  errors  steps/s   median ms  p95 ms");
+  console.log(`answers     ${String(run.requests).padStart(9)} ${String(run.failed).padStart(7)} ${fmt(run.ok / seconds)} ${fmt(percentile(run.latenciesMs, 50))} ${fmt(percentile(run.latenciesMs, 95))}`);
+  console.log(`errors seen by clients: ${JSON.stringify(run.errors)}`);
+  console.log(`steps: acknowledged ${run.ackedStepIds.length}, stored ${audit.stored}, missing ${audit.missing}, stored but unacknowledged ${audit.unacknowledged}, stored twice ${dupes.length}`);
+  await sql.end({ timeout: 5 });
+  if (audit.missing || dupes.length || audit.unacknowledged > run.failed) process.exit(1);
+}
+
 async function main() {
   const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.role, "tech")).limit(1);
+  if (process.env.LOAD_KILL_PID) return clusterRun(tech.id);
   console.log(`load: ${walkers} technicians for ${seconds} s against ${baseUrl}`);
 
   const steady = await runLoad({ baseUrl, walkers, seconds, userId: tech.id });
@@ -65,17 +99,18 @@ async function main() {
   // Fault 2: the SMTP server down for a minute while 20 messages are queued.
   console.log("\nfault: SMTP down for 60 s with 20 messages queued");
   const transport = smtpTransport({ host: "127.0.0.1", port: smtpPort, secure: false } as Parameters<typeof smtpTransport>[0]);
+  const deliverer = outboxDeliverer(transport, { from: "load@example.test" });
   const ids: number[] = [];
   for (let i = 0; i < 20; i++) ids.push(await enqueueMail(db, { to: `load-${i}@example.test`, subject: `Load test ${i}`, text: "Queued during an SMTP outage." }));
   const downUntil = Date.now() + 60_000;
   while (Date.now() < downUntil) {
-    await deliverDue(transport, { from: "load@example.test" });
+    await deliverer.deliverDue();
     await new Promise((r) => setTimeout(r, 2000));
   }
   const smtp = await startFakeSmtp({ port: smtpPort, controlPort: null });
   const giveUp = Date.now() + 5 * 60_000;
   while (Date.now() < giveUp && smtp.messages.length < ids.length) {
-    await deliverDue(transport, { from: "load@example.test" });
+    await deliverer.deliverDue();
     await new Promise((r) => setTimeout(r, 2000));
   }
   const [{ n: sent }] = await db.select({ n: count() }).from(mailOutbox).where(and(inArray(mailOutbox.id, ids), eq(mailOutbox.status, "sent")));

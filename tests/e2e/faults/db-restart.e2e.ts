@@ -43,4 +43,12 @@ describe("PostgreSQL restarted under load", () => {
     const dupes = await sql`select case_id, seq, count(*) from case_steps where case_id = any(${result.caseIds}) group by 1, 2 having count(*) > 1`;
     expect(dupes.length).toBe(0);
   });
+
+  // npm test names the processes it started for the browser tests (server, mail worker, fake SMTP).
+  it.runIf(process.env.E2E_PROCESS_PIDS)("no process the tests started was brought down by the restart", () => {
+    const pids = process.env.E2E_PROCESS_PIDS!.split(" ").filter(Boolean).map(Number);
+    expect(pids.length).toBeGreaterThan(0);
+    const alive = (pid: number) => { try { process.kill(pid, 0); return true; } catch { return false; } };
+    expect(pids.filter((pid) => !alive(pid))).toEqual([]);
+  });
 });

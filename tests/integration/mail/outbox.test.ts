@@ -1,11 +1,11 @@
 import net from "node:net";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { mailOutbox } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import { retryMailAction } from "@/lib/mail/actions";
 import { MAX_ATTEMPTS, retryDelayMs } from "@/lib/mail/backoff";
-import { deliverDue } from "@/lib/mail/deliver";
+import { outboxDeliverer } from "@/lib/mail/deliver";
 import { startFakeSmtp, type FakeSmtp } from "@/lib/mail/fake-smtp";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { smtpTransport } from "@/lib/mail/transport";
@@ -19,6 +19,11 @@ async function freePort(): Promise<number> {
   const { port } = server.address() as net.AddressInfo;
   await new Promise<void>((resolve) => server.close(() => resolve()));
   return port;
+}
+
+/** Time passing: makes every waiting message due now (backoff and leases run on the database clock). */
+async function makeDue() {
+  await db.execute(sql`update mail_outbox set next_attempt_at = now() where status = 'queued'`);
 }
 
 async function message(id: number) {
@@ -38,21 +43,27 @@ describe("the mail outbox", () => {
     const port = await freePort(); // nothing listens here yet
     const transport = smtpTransport({ host: "127.0.0.1", port });
     const id = await enqueueMail(db, { to: "rider@example.test", subject: "Your unit — booked in", text: "Hello\nTwo lines, one €.", html: "<p>Hello</p>" });
-    const t0 = new Date();
+    const worker = outboxDeliverer(transport, { from: FROM });
+    const t0 = Date.now();
 
-    const down = await deliverDue(transport, { from: FROM, now: t0 });
+    const down = await worker.deliverDue();
+    const t1 = Date.now();
     expect(down).toEqual({ sent: 0, retrying: 1, failed: 0 });
     const waiting = await message(id);
     expect(waiting.status).toBe("queued");
     expect(waiting.attempts).toBe(1);
     expect(waiting.lastError).toMatch(/ECONNREFUSED/);
-    expect(waiting.nextAttemptAt.getTime()).toBe(t0.getTime() + retryDelayMs(1));
+    expect(waiting.nextAttemptAt.getTime()).toBeGreaterThanOrEqual(t0 + retryDelayMs(1) - 5);
+    expect(waiting.nextAttemptAt.getTime()).toBeLessThanOrEqual(t1 + retryDelayMs(1) + 5);
+    expect(waiting.claimToken).toBeNull();
+    expect(waiting.messageId).toMatch(/^<outbox-\d+\.[0-9a-f]+@workshop\.example\.test>$/);
 
     // Not due yet: a pass before the backoff ends leaves it alone.
-    expect(await deliverDue(transport, { from: FROM, now: new Date(t0.getTime() + 1000) })).toEqual({ sent: 0, retrying: 0, failed: 0 });
+    expect(await worker.deliverDue()).toEqual({ sent: 0, retrying: 0, failed: 0 });
 
     fake = await startFakeSmtp({ port });
-    const back = await deliverDue(transport, { from: FROM, now: new Date(t0.getTime() + retryDelayMs(1)) });
+    await makeDue();
+    const back = await worker.deliverDue();
     expect(back).toEqual({ sent: 1, retrying: 0, failed: 0 });
     const sent = await message(id);
     expect(sent.status).toBe("sent");
@@ -63,6 +74,8 @@ describe("the mail outbox", () => {
     expect(fake.messages[0].envelopeTo).toEqual(["rider@example.test"]);
     expect(fake.messages[0].text).toBe("Hello\nTwo lines, one €.");
     expect(fake.messages[0].html).toBe("<p>Hello</p>");
+    // The Message-ID fixed before the first attempt is the one that went out.
+    expect(fake.messages[0].raw).toContain(`Message-ID: ${waiting.messageId}`);
     transport.close();
   });
 
@@ -77,11 +90,11 @@ describe("the mail outbox", () => {
     await new Promise<void>((resolve) => hangUp.listen(0, "127.0.0.1", resolve));
     const transport = smtpTransport({ host: "127.0.0.1", port: (hangUp.address() as net.AddressInfo).port });
     const id = await enqueueMail(db, { to: "dealer@example.test", subject: "s", text: "t" });
-    let now = new Date(Date.now() + 1000); // past the row's own (database clock) next_attempt_at
+    const worker = outboxDeliverer(transport, { from: FROM });
     for (let attempt = 1; attempt <= MAX_ATTEMPTS; attempt++) {
-      const report = await deliverDue(transport, { from: FROM, now });
+      await makeDue();
+      const report = await worker.deliverDue();
       expect(report, `attempt ${attempt}`).toEqual(attempt === MAX_ATTEMPTS ? { sent: 0, retrying: 0, failed: 1 } : { sent: 0, retrying: 1, failed: 0 });
-      now = new Date(now.getTime() + retryDelayMs(attempt));
     }
     await new Promise<void>((resolve) => hangUp.close(() => resolve()));
     const failed = await message(id);
@@ -100,10 +113,12 @@ describe("the mail outbox", () => {
     fake = await startFakeSmtp({ port: 0 });
     const transport = smtpTransport({ host: "127.0.0.1", port: fake.port });
     for (let i = 0; i < 5; i++) await enqueueMail(db, { to: `r${i}@example.test`, subject: `m${i}`, text: "x" });
-    const [a, b] = await Promise.all([deliverDue(transport, { from: FROM, batch: 3 }), deliverDue(transport, { from: FROM, batch: 3 })]);
-    // On a loaded machine a claim can come back empty-handed or a send can be deferred; a later
-    // pass (past any lease or backoff) picks up what is left. What must never happen is a resend.
-    const later = await deliverDue(transport, { from: FROM, batch: 10, now: new Date(Date.now() + 24 * 3_600_000) });
+    const workers = [outboxDeliverer(transport, { from: FROM }), outboxDeliverer(transport, { from: FROM })];
+    const [a, b] = await Promise.all(workers.map((w) => w.deliverDue({ batch: 3 })));
+    // On a loaded machine a send can fail and wait for its backoff; a later pass picks up what is
+    // left. What must never happen is a resend.
+    await makeDue();
+    const later = await workers[0].deliverDue({ batch: 10 });
     expect(a.sent + b.sent + later.sent).toBe(5);
     expect(fake.messages.map((m) => m.subject).sort()).toEqual(["m0", "m1", "m2", "m3", "m4"]);
     transport.close();
