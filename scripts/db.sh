@@ -82,6 +82,8 @@ port_holder() {
 resolve_port() {
   if [ -n "$PORT" ]; then return; fi
   if [ -f "$PORT_FILE" ]; then PORT=$(cat "$PORT_FILE"); return; fi
+  # A cluster started before its port was remembered: its postmaster.pid names the port (line 4).
+  if [ -f "$PGDATA/postmaster.pid" ]; then PORT=$(sed -n 4p "$PGDATA/postmaster.pid"); return; fi
   PORT=$DEFAULT_PORT
   while port_in_use "$PORT"; do PORT=$((PORT + 1)); done
   [ "$PORT" = "$DEFAULT_PORT" ] || log "port $DEFAULT_PORT is taken by $(port_holder "$DEFAULT_PORT"); this cluster uses $PORT" >&2
