@@ -1,3 +1,4 @@
+import { ScrollRegion } from "@/components/ui/scroll-region";
 import { IMPORT_COLUMNS } from "@/lib/csv/columns";
 
 /** The documented column set, with an example line that can be pasted into a spreadsheet. */
@@ -26,7 +27,9 @@ export function ImportColumns() {
         semicolons both work as separators. Each row becomes a closed case with its confirmed cause and parts; it has no phone triage,
         so tree-accuracy figures leave it out, but cause, parts and repeat-return reports count it.
       </p>
-      <pre className="overflow-x-auto rounded-md bg-paper-deep p-3 font-mono text-xs">{example}</pre>
+      <ScrollRegion label="Example file" className="overflow-x-auto rounded-md bg-paper-deep">
+        <pre className="p-3 font-mono text-xs">{example}</pre>
+      </ScrollRegion>
     </div>
   );
 }
