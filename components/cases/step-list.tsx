@@ -10,7 +10,7 @@ export interface StepView {
   ranking: StoredRanking;
 }
 
-const pct = (p: number) => `${Math.round(p * 100)} %`;
+const pct = (p: number) => `${Math.round(p * 100)}\u00a0%`;
 
 /** The recorded answers, each with the ranking the technician saw after it (collapsed). */
 export function StepList({ steps, nameOf, titleOf }: { steps: StepView[]; nameOf: (slug: string) => string; titleOf: (key: string) => string }) {

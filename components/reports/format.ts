@@ -1,5 +1,5 @@
-export const pct = (x: number, digits = 1) => `${(x * 100).toFixed(digits)} %`;
-export const interval = (low: number, high: number) => `${(low * 100).toFixed(1)}–${(high * 100).toFixed(1)} %`;
+export const pct = (x: number, digits = 1) => `${(x * 100).toFixed(digits)}\u00a0%`;
+export const interval = (low: number, high: number) => `${(low * 100).toFixed(1)}–${(high * 100).toFixed(1)}\u00a0%`;
 export const num = (x: number, digits = 3) => x.toFixed(digits);
 export const whole = new Intl.NumberFormat("en-GB");
 
