@@ -9,6 +9,7 @@ results=$(mktemp -d)
 
 ensure_node_modules
 ensure_chromium
+ensure_poppler
 
 export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-54339}
 bash scripts/db.sh start

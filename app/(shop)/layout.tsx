@@ -6,8 +6,8 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
   return (
     <>
       <AppHeader user={user} />
-      <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
-      <footer className="mx-auto max-w-7xl px-4 pb-8 text-xs text-ink-faint">
+      <main className="mx-auto max-w-7xl px-4 py-6 print:max-w-none print:p-0">{children}</main>
+      <footer className="mx-auto max-w-7xl px-4 pb-8 text-xs text-ink-faint print:hidden">
         Rootbench supports, never replaces, the motor maker&apos;s service documents, local regulations and licensed practice.
       </footer>
     </>
