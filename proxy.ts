@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { isSameOrigin } from "./lib/http/origin";
 
-const PUBLIC_PATHS = ["/sign-in", "/api/health", "/favicon.ico", "/icon.svg"];
+const PUBLIC_PATHS = ["/sign-in", "/api/health", "/favicon.ico", "/icon.svg", "/robots.txt"];
 
 // Cheap, optimistic checks only; the real rules are enforced in lib/auth on every entry point.
 export function proxy(request: NextRequest) {

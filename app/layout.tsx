@@ -17,6 +17,7 @@ const mono = localFont({ src: "./fonts/jetbrains-mono-latin-400-normal.woff2", v
 export const metadata: Metadata = {
   title: { default: "Rootbench", template: "%s · Rootbench" },
   description: "Triage, bench records and shared knowledge for drive-unit repair workshops.",
+  icons: { icon: [{ url: "/favicon.ico", sizes: "any" }, { url: "/icon.svg", type: "image/svg+xml" }] },
 };
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {

@@ -13,12 +13,13 @@ import {
   timestamp,
   uniqueIndex,
 } from "drizzle-orm/pg-core";
+import { ROLES, type Role } from "../lib/auth/roles";
+import { STRENGTHS, type Strength } from "../lib/diagnosis/types";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const ts = (name: string) => timestamp(name, { withTimezone: true, mode: "date" });
 
-export const ROLES = ["admin", "lead", "senior", "tech", "trainee"] as const;
-export type Role = (typeof ROLES)[number];
+export { ROLES, STRENGTHS, type Role };
 const inList = (values: readonly string[]) => sql.raw(values.map((v) => `'${v}'`).join(", "));
 
 /* ---------- people and sign-in ---------- */
@@ -274,8 +275,7 @@ export const treeOptions = pgTable(
 );
 export type TreeOption = typeof treeOptions.$inferSelect;
 
-export const STRENGTHS = ["rules_out", "against", "neutral", "for", "strong"] as const;
-export type StrengthName = (typeof STRENGTHS)[number];
+export type StrengthName = Strength;
 
 export const optionEvidence = pgTable(
   "option_evidence",

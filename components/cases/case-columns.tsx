@@ -2,6 +2,7 @@ import Link from "next/link";
 import { createColumnHelper } from "@tanstack/react-table";
 import type { CaseListRow, CaseSort } from "@/lib/cases/cases-key";
 import { StatusBadge } from "./status-badge";
+import { percent } from "@/lib/format";
 
 const col = createColumnHelper<CaseListRow>();
 const day = (iso: string) => iso.slice(0, 10);
@@ -19,6 +20,6 @@ export const caseColumns = [
   col.accessor("technicianName", { id: "technician", header: "Technician", cell: (c) => c.getValue() ?? "—" }),
   col.accessor("likelyCause", {
     id: "likely", header: "Likely at triage", enableSorting: false,
-    cell: (c) => c.getValue() ? <>{c.getValue()} <span className="text-xs text-ink-faint">{Math.round((c.row.original.likelyProbability ?? 0) * 100)}&nbsp;%</span></> : <span className="text-ink-faint">—</span>,
+    cell: (c) => c.getValue() ? <>{c.getValue()} <span className="whitespace-nowrap text-xs text-ink-faint">{percent(c.row.original.likelyProbability ?? 0)}</span></> : <span className="text-ink-faint">—</span>,
   }),
 ];

@@ -5,7 +5,7 @@ import useSWR from "swr";
 import { flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import { EmptyState } from "@/components/ui/empty-state";
 import { caseQueryParams, casesKey, DEFAULT_PAGE_SIZE, queryFromParams, type CaseListPage, type CaseTableQuery } from "@/lib/cases/cases-key";
-import { fetcher } from "@/lib/cases/fetcher";
+import { fetcher } from "@/lib/fetcher";
 import { caseColumns, SORTABLE } from "./case-columns";
 import { CaseFilters, type FilterChoices } from "./case-filters";
 import { ScrollRegion } from "@/components/ui/scroll-region";

@@ -1,5 +1,6 @@
-import type { StoredRanking } from "@/lib/cases/ranking-types";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { EmptyState } from "@/components/ui/empty-state";
+import { percent } from "@/lib/format";
 
 export interface StepView {
   seq: number;
@@ -10,7 +11,6 @@ export interface StepView {
   ranking: StoredRanking;
 }
 
-const pct = (p: number) => `${Math.round(p * 100)}\u00a0%`;
 
 /** The recorded answers, each with the ranking the technician saw after it (collapsed). */
 export function StepList({ steps, nameOf, titleOf }: { steps: StepView[]; nameOf: (slug: string) => string; titleOf: (key: string) => string }) {
@@ -30,9 +30,9 @@ export function StepList({ steps, nameOf, titleOf }: { steps: StepView[]; nameOf
                 <p className="font-medium">Ranking shown</p>
                 <ul>
                   {s.ranking.causes.filter((c) => c.probability > 0).slice(0, 6).map((c) => (
-                    <li key={c.causeId} className="flex justify-between gap-2"><span>{nameOf(c.causeId)}</span><span className="font-mono">{pct(c.probability)}</span></li>
+                    <li key={c.causeId} className="flex justify-between gap-2"><span>{nameOf(c.causeId)}</span><span className="whitespace-nowrap font-mono">{percent(c.probability)}</span></li>
                   ))}
-                  <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="font-mono">{pct(s.ranking.unlisted)}</span></li>
+                  <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="whitespace-nowrap font-mono">{percent(s.ranking.unlisted)}</span></li>
                 </ul>
               </div>
               <div>

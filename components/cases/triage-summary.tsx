@@ -1,7 +1,6 @@
 import type { Case } from "@/db/schema";
-import { formatEuro } from "@/lib/cases/quote";
+import { money, percent } from "@/lib/format";
 
-const pct = (p: number) => `${Math.round(p * 100)}\u00a0%`;
 
 /** What the triage ended with: the final ranking, the quote, the bench plan and what was asked for. */
 export function TriageSummary({ kase, nameOf }: { kase: Case; nameOf: (slug: string) => string }) {
@@ -11,13 +10,13 @@ export function TriageSummary({ kase, nameOf }: { kase: Case; nameOf: (slug: str
       <div>
         <p className="font-medium">Ranking at the end of the call</p>
         <ul>
-          {ranking.map(([slug, p]) => <li key={slug} className="flex justify-between gap-2"><span>{nameOf(slug)}</span><span className="whitespace-nowrap font-mono">{pct(p)}</span></li>)}
-          <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="whitespace-nowrap font-mono">{pct(kase.finalRanking?.unlisted ?? 0)}</span></li>
+          {ranking.map(([slug, p]) => <li key={slug} className="flex justify-between gap-2"><span>{nameOf(slug)}</span><span className="whitespace-nowrap font-mono">{percent(p)}</span></li>)}
+          <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="whitespace-nowrap font-mono">{percent(kase.finalRanking?.unlisted ?? 0)}</span></li>
         </ul>
       </div>
       <div>
         <p className="font-medium">Rough quote</p>
-        <p>{kase.quoteLowCents !== null && kase.quoteHighCents !== null ? `${formatEuro(kase.quoteLowCents)} – ${formatEuro(kase.quoteHighCents)}` : "none (advised by phone)"}</p>
+        <p>{kase.quoteLowCents !== null && kase.quoteHighCents !== null ? `${money(kase.quoteLowCents)} – ${money(kase.quoteHighCents)}` : "none (advised by phone)"}</p>
         {kase.whatToSend ? <><p className="mt-2 font-medium">What to send</p><p className="text-ink-soft">{kase.whatToSend}</p></> : null}
       </div>
       <div>

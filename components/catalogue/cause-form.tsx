@@ -4,7 +4,8 @@ import { saveCause } from "@/app/(shop)/catalogue/actions";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { AREA_LABELS, euros } from "@/lib/catalogue/format";
+import { AREA_LABELS } from "@/lib/catalogue/areas";
+import { euros } from "@/lib/format";
 import type { CauseWithParts, PartRow } from "@/lib/catalogue/queries";
 
 const centsToInput = (c: number) => (c % 100 === 0 ? String(c / 100) : (c / 100).toFixed(2));

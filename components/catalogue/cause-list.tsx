@@ -1,7 +1,8 @@
 import Link from "next/link";
 import type { CauseArea } from "@/db/schema";
 import type { CauseWithParts } from "@/lib/catalogue/queries";
-import { AREA_LABELS, minutes, priceBand } from "@/lib/catalogue/format";
+import { AREA_LABELS } from "@/lib/catalogue/areas";
+import { minutes, priceBand } from "@/lib/format";
 
 export function CauseList({ causes, canEdit, highlight }: { causes: CauseWithParts[]; canEdit: boolean; highlight?: string }) {
   const byArea = new Map<CauseArea, CauseWithParts[]>();

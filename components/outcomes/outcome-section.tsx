@@ -1,4 +1,4 @@
-import { saveOutcome, reopenCase, startBench } from "@/app/(shop)/reports/_actions/outcomes/actions";
+import { saveOutcome, reopenCase, startBench } from "@/app/(shop)/cases/[id]/actions";
 import { Panel } from "@/components/ui/panel";
 import { may } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
-import { formatDay } from "@/components/writeups/format";
+import { formatDay } from "@/lib/format";
 import type { PracticeCaseRow } from "@/lib/practice/queries";
 import { ScrollRegion } from "@/components/ui/scroll-region";
 

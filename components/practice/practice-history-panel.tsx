@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
-import { formatDay } from "@/components/writeups/format";
+import { formatDay } from "@/lib/format";
 import { currentUser } from "@/lib/auth/session";
 import { practiceHistory } from "@/lib/practice/history";
 

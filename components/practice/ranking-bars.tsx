@@ -1,6 +1,5 @@
 import type { RankingView } from "@/lib/practice/types";
-
-const percent = (p: number) => `${(p * 100).toFixed(p < 0.1 ? 1 : 0)}%`;
+import { percentFine } from "@/lib/format";
 
 /** The engine's ranking as bars; causes ruled out are listed apart with the answer that did it. */
 export function RankingBars({ ranking, limit = 6 }: { ranking: RankingView; limit?: number }) {
@@ -13,7 +12,7 @@ export function RankingBars({ ranking, limit = 6 }: { ranking: RankingView; limi
           <li key={c.slug}>
             <div className="flex items-baseline justify-between gap-2 text-sm">
               <span className={i === 0 ? "font-semibold" : ""}>{c.name}</span>
-              <span className="font-mono text-xs text-ink-soft">{percent(c.probability)}</span>
+              <span className="whitespace-nowrap font-mono text-xs text-ink-soft">{percentFine(c.probability)}</span>
             </div>
             <div className="mt-0.5 h-2 rounded-full bg-paper-deep" aria-hidden="true">
               <div className={`h-2 rounded-full ${i === 0 ? "bg-copper" : "bg-ink-faint"}`} style={{ width: `${Math.max(1, c.probability * 100)}%` }} />
@@ -21,7 +20,7 @@ export function RankingBars({ ranking, limit = 6 }: { ranking: RankingView; limi
           </li>
         ))}
       </ol>
-      <p className="text-xs text-ink-faint">None of the listed causes: {percent(ranking.unlisted)}</p>
+      <p className="text-xs text-ink-faint">None of the listed causes: {percentFine(ranking.unlisted)}</p>
       {out.length ? (
         <details className="text-xs text-ink-soft">
           <summary className="cursor-pointer">{out.length} ruled out</summary>

@@ -3,7 +3,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import type { VersionAccuracy } from "@/lib/reports/accuracy";
 import { CalibrationChart } from "./calibration-chart";
-import { num, pct, whole } from "./format";
+import { num, pct, whole } from "@/lib/format";
 import { NumberTable } from "./number-table";
 
 /** Top-1/top-3 hits, Brier score and log loss per tree version, and the calibration of the one chosen. */

@@ -1,7 +1,7 @@
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import type { Pareto } from "@/lib/reports/pareto";
-import { interval, pct, whole } from "./format";
+import { interval, pct, whole } from "@/lib/format";
 import { NumberTable } from "./number-table";
 import { ParetoChart } from "./pareto-chart";
 import { ScrollRegion } from "@/components/ui/scroll-region";

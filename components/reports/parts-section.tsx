@@ -1,7 +1,7 @@
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import type { PartsDemand } from "@/lib/reports/parts";
-import { monthLabels, PARTIAL_MONTH_NOTE, whole } from "./format";
+import { monthLabels, PARTIAL_MONTH_NOTE, whole } from "@/lib/format";
 import { NumberTable } from "./number-table";
 import { PartsChart } from "./parts-chart";
 import { ScrollRegion } from "@/components/ui/scroll-region";

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { Panel, Stat } from "@/components/ui/panel";
 import type { RepeatRate } from "@/lib/reports/repeats";
-import { interval, pct, whole } from "./format";
+import { interval, pct, whole } from "@/lib/format";
 
 export function RepeatSection({ repeats }: { repeats: RepeatRate }) {
   return (

@@ -1,7 +1,7 @@
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import { TREND_REST, type CauseTrend } from "@/lib/reports/trend";
-import { monthLabels, PARTIAL_MONTH_NOTE } from "./format";
+import { monthLabels, PARTIAL_MONTH_NOTE } from "@/lib/format";
 import { NumberTable } from "./number-table";
 import { TrendChart } from "./trend-chart";
 

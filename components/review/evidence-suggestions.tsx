@@ -1,10 +1,10 @@
-import { acceptSuggestion, setLikelihoodMode } from "@/app/(shop)/reports/_actions/review/actions";
+import { acceptSuggestion, setLikelihoodMode } from "@/app/(shop)/trees/[id]/actions";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
 import { may } from "@/lib/auth/roles";
 import { currentUser } from "@/lib/auth/session";
 import { treeReview } from "@/lib/review/queries";
-import { STRENGTH_LABELS } from "@/lib/review/strength";
+import { STRENGTH_LABELS } from "@/lib/trees/kinds";
 import { AcceptSuggestionForm } from "./accept-form";
 import { LikelihoodModeForm } from "./likelihood-mode-form";
 import { SuggestionText } from "./suggestion-item";

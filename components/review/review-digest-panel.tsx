@@ -1,6 +1,6 @@
 import Link from "next/link";
-import { acceptSuggestion } from "@/app/(shop)/reports/_actions/review/actions";
-import { STRENGTH_LABELS } from "@/lib/review/strength";
+import { acceptSuggestion } from "@/app/(shop)/trees/[id]/actions";
+import { STRENGTH_LABELS } from "@/lib/trees/kinds";
 import { AcceptSuggestionForm } from "./accept-form";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";

@@ -1,7 +1,7 @@
 "use client";
 import { useMemo } from "react";
 import useSWR from "swr";
-import { fetchJson } from "@/lib/search/fetcher";
+import { fetcher } from "@/lib/fetcher";
 import type { WriteupIndexPayload } from "@/lib/search/types";
 import { WriteupIndex } from "@/lib/search/writeup-index";
 
@@ -14,7 +14,7 @@ export const WRITEUP_INDEX_KEY = "/api/writeups/index";
  * (loading takes a fraction of the time building it from the documents would).
  */
 export function useWriteupIndex() {
-  const { data, error, isLoading } = useSWR<WriteupIndexPayload>(WRITEUP_INDEX_KEY, fetchJson, {
+  const { data, error, isLoading } = useSWR<WriteupIndexPayload>(WRITEUP_INDEX_KEY, fetcher, {
     revalidateOnFocus: true,
     dedupingInterval: 10_000,
     keepPreviousData: true,

@@ -31,7 +31,7 @@ export function ImportTreeForm() {
           </ul>
         </div>
       ) : null}
-      <p className="text-xs text-ink-faint">The format is documented with the app (lib/validation/tree-file.md); any tree&apos;s page exports one to start from.</p>
+      <p className="text-xs text-ink-faint">The format is documented with the app (lib/trees/file/format.md); any tree&apos;s page exports one to start from.</p>
     </form>
   );
 }

@@ -2,6 +2,7 @@ import type { TreeGraph } from "@/lib/trees/graph-types";
 import { OPENING_CAUTION } from "@/lib/trees/caution";
 import { KIND_LABELS } from "@/lib/trees/kinds";
 import { STRENGTH_STEPS } from "./strength-steps";
+import { percent } from "@/lib/format";
 
 /** Nodes in the order a walk meets them (breadth first from the start), then any the walk never reaches. */
 function walkOrder(graph: TreeGraph) {
@@ -31,7 +32,7 @@ export function TreeOutline({ graph }: { graph: TreeGraph }) {
         <h3 className="text-sm font-semibold">Causes and prior weights</h3>
         <ul className="mt-1 flex flex-wrap gap-2 text-xs">
           {graph.causes.map((c) => (
-            <li key={c.slug} className="rounded border border-ink-faint/40 px-2 py-0.5">{c.name} <span className="font-mono text-ink-faint">{total ? `${Math.round((c.priorWeight / total) * 100)}%` : "—"}</span></li>
+            <li key={c.slug} className="rounded border border-ink-faint/40 px-2 py-0.5">{c.name} <span className="font-mono text-ink-faint">{total ? percent(c.priorWeight / total) : "—"}</span></li>
           ))}
         </ul>
       </div>

@@ -3,8 +3,8 @@ import { EmptyState } from "@/components/ui/empty-state";
 import type { TreeListRow } from "@/lib/trees/queries";
 import { ProblemCount, StatusBadge, VersionBadge } from "./status-badge";
 import { ScrollRegion } from "@/components/ui/scroll-region";
+import { formatDay } from "@/lib/format";
 
-const when = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
 export function TreeTable({ rows, filtered }: { rows: TreeListRow[]; filtered: boolean }) {
   if (rows.length === 0) {
@@ -33,7 +33,7 @@ export function TreeTable({ rows, filtered }: { rows: TreeListRow[]; filtered: b
               <td className="py-2 pr-3 text-ink-soft">{r.scope.length ? r.scope.map((s) => s.label).join(", ") : "All families"}</td>
               <td className="py-2 pr-3"><StatusBadge status={r.status} /></td>
               <td className="py-2 pr-3">{r.latestNumber !== null && r.latestState ? <VersionBadge state={r.latestState} number={r.latestNumber} /> : "—"}</td>
-              <td className="py-2 pr-3 text-ink-soft">{r.lastEditor ?? "—"}{r.editedAt ? <span className="block text-xs text-ink-faint">{when.format(r.editedAt)}</span> : null}</td>
+              <td className="py-2 pr-3 text-ink-soft">{r.lastEditor ?? "—"}{r.editedAt ? <span className="block text-xs text-ink-faint">{formatDay(r.editedAt)}</span> : null}</td>
               <td className="py-2"><ProblemCount n={r.problems} /></td>
             </tr>
           ))}

@@ -1,8 +1,8 @@
 import Link from "next/link";
 import type { VersionRow } from "@/lib/trees/queries";
 import { VersionBadge } from "./status-badge";
+import { formatDayTime } from "@/lib/format";
 
-const when = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
 
 export function VersionTable({ treeId, versions }: { treeId: number; versions: VersionRow[] }) {
   return (
@@ -16,8 +16,8 @@ export function VersionTable({ treeId, versions }: { treeId: number; versions: V
           return (
             <tr key={v.id} className="border-b border-ink-faint/20 align-top">
               <td className="py-1.5 pr-3"><VersionBadge state={v.state} number={v.number} /></td>
-              <td className="py-1.5 pr-3 text-ink-soft">{v.editedBy ?? "—"} <span className="block text-xs text-ink-faint">{when.format(v.editedAt)}</span></td>
-              <td className="py-1.5 pr-3 text-ink-soft">{v.publishedAt ? <>{v.publishedBy ?? "—"}<span className="block text-xs text-ink-faint">{when.format(v.publishedAt)}</span></> : "—"}</td>
+              <td className="py-1.5 pr-3 text-ink-soft">{v.editedBy ?? "—"} <span className="block text-xs text-ink-faint">{formatDayTime(v.editedAt)}</span></td>
+              <td className="py-1.5 pr-3 text-ink-soft">{v.publishedAt ? <>{v.publishedBy ?? "—"}<span className="block text-xs text-ink-faint">{formatDayTime(v.publishedAt)}</span></> : "—"}</td>
               <td className="py-1.5 pr-3 text-ink-soft">{v.note || "—"}</td>
               <td className="py-1.5 text-xs">
                 <a href={`/api/trees/${treeId}/export?version=${v.number}`}>Export JSON</a>

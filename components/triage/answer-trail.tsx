@@ -1,4 +1,4 @@
-import type { WalkStep } from "@/lib/cases/walk-types";
+import type { WalkStep } from "@/lib/triage/walk-types";
 
 /** The answers so far, oldest first; the last one can be taken back. */
 export function AnswerTrail({ steps, titleOf, labelOf, onUndo, disabled }: {

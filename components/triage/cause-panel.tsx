@@ -1,5 +1,5 @@
 import { Panel } from "@/components/ui/panel";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { CauseRanking } from "./cause-ranking";
 import { ConclusionNote } from "./conclusion-note";
 import { NextQuestions } from "./next-questions";

@@ -1,4 +1,4 @@
-import type { ViewNode } from "@/lib/cases/walk-view";
+import type { ViewNode } from "@/lib/triage/walk-view";
 
 /** Caution nodes the walk has passed: their text is read to the caller or followed at the bench. */
 export function CautionNotes({ cautions }: { cautions: ViewNode[] }) {

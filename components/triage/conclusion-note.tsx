@@ -1,6 +1,6 @@
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { unlistedLeads } from "@/lib/cases/ranking";
-import { percent } from "./format";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { unlistedLeads } from "@/lib/triage/ranking";
+import { percent } from "@/lib/format";
 
 /** The stop rule's advice: keep asking, enough to conclude, or none of the listed causes fits. */
 export function ConclusionNote({ ranking, nameOf }: { ranking: StoredRanking; nameOf: (slug: string) => string }) {

@@ -4,11 +4,11 @@ import { finishCase } from "@/app/(shop)/triage/actions";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import type { ActionState } from "@/lib/actions/define";
-import type { FinishedCase } from "@/lib/cases/finish";
-import { benchPlanFor, formatEuro, QUOTE_MIN_PROBABILITY, roughQuote, type QuoteCause } from "@/lib/cases/quote";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { BATTERY_POST_WARNING, SEND_KINDS, SEND_LABELS, type SendKind } from "@/lib/cases/shipping";
-import { percent } from "./format";
+import type { FinishedCase } from "@/lib/triage/finish";
+import { benchPlanFor, QUOTE_MIN_PROBABILITY, roughQuote, type QuoteCause } from "@/lib/triage/quote";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { BATTERY_POST_WARNING, SEND_KINDS, SEND_LABELS, type SendKind } from "@/lib/triage/shipping";
+import { money, percent } from "@/lib/format";
 
 type Outcome = "booked_in" | "advised";
 
@@ -47,7 +47,7 @@ export function FinishPanel({ caseId, ranking, catalogue, email, disabled }: {
             <h3 className="text-sm font-semibold text-ink-soft">Rough quote</h3>
             {quote ? (
               <>
-                <p className="text-2xl font-semibold">{formatEuro(quote.lowCents)} – {formatEuro(quote.highCents)}</p>
+                <p className="text-2xl font-semibold">{money(quote.lowCents)} – {money(quote.highCents)}</p>
                 <p className="text-sm">About {quote.labourMinutes} min of labour.</p>
                 <p className="mt-1 text-xs text-ink-soft">
                   Rule: the price bands and labour minutes of the causes at {QUOTE_MIN_PROBABILITY * 100} % or more

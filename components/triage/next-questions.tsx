@@ -1,6 +1,6 @@
-import type { StoredRanking } from "@/lib/cases/ranking-types";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { EmptyState } from "@/components/ui/empty-state";
-import { bits } from "./format";
+import { bits } from "@/lib/format";
 
 /** The best next questions by expected information gain per minute; picking one jumps the walk there. */
 export function NextQuestions({ suggestions, currentKey, titleOf, nameOf, onPick, disabled }: {

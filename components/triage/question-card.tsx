@@ -1,5 +1,5 @@
 import { OPENING_CAUTION } from "@/lib/trees/caution";
-import type { ViewNode, ViewOption } from "@/lib/cases/walk-view";
+import type { ViewNode, ViewOption } from "@/lib/triage/walk-view";
 
 const KIND_LABEL = { question: "Ask the caller", check: "Hands-on check" } as const;
 

@@ -1,4 +1,4 @@
-import type { RideAdvice } from "@/lib/cases/safety";
+import type { RideAdvice } from "@/lib/triage/safety";
 
 /** DESIGN §7: the prominent warning to tell the caller to stop riding. */
 export function StopRidingBanner({ advice }: { advice: RideAdvice }) {

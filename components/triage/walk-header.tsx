@@ -1,4 +1,4 @@
-import type { WalkCase } from "@/lib/cases/walk-types";
+import type { WalkCase } from "@/lib/triage/walk-types";
 
 /** Who is calling about what, in one calm line. */
 export function WalkHeader({ kase }: { kase: WalkCase }) {

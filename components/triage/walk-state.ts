@@ -1,7 +1,7 @@
-import { computeRanking } from "@/lib/cases/ranking";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
+import { computeRanking } from "@/lib/triage/ranking";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { ModelCache, type DxSettings, type DxTree } from "@/lib/diagnosis";
-import type { WalkStep } from "@/lib/cases/walk-types";
+import type { WalkStep } from "@/lib/triage/walk-types";
 
 export interface WalkState {
   steps: WalkStep[];

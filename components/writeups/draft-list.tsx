@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Panel } from "@/components/ui/panel";
-import { formatDay } from "./format";
+import { formatDay } from "@/lib/format";
 
 export function DraftList({ drafts, userId }: {
   drafts: { id: number; title: string; updatedAt: Date; authorId: string | null; authorName: string | null }[];

@@ -5,7 +5,7 @@ import { renderMarkdown, wantsToc } from "@/lib/markdown/render";
 import { thumbUrl, uploadIdsIn, uploadUrl } from "@/lib/storage/urls";
 import type { WriteupView } from "@/lib/writeups/queries";
 import { Chip, ChipRow, StatusBadge } from "./chips";
-import { formatDay } from "./format";
+import { formatDay } from "@/lib/format";
 import { MarkdownBody } from "./markdown-body";
 import { PublishButton } from "./publish-button";
 import { SafetyNote } from "./safety-note";

@@ -1,6 +1,6 @@
 import type { Tx } from "@/db";
 import { causeParts, causes, motorFamilies, motorMakers, parts } from "@/db/schema";
-import type { Content } from "@/lib/content/catalogue";
+import type { Content } from "@/db/seed/content";
 
 const cents = (eur: number) => Math.round(eur * 100);
 

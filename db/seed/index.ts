@@ -2,7 +2,7 @@ import path from "node:path";
 import { count } from "drizzle-orm";
 import { db, sql } from "@/db";
 import { users } from "@/db/schema";
-import { loadContent } from "@/lib/content/catalogue";
+import { loadContent } from "@/db/seed/content";
 import { DEMO_ACCOUNTS } from "./accounts";
 import { seedCatalogue } from "./catalogue";
 import { seedHistory } from "./history";

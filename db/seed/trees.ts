@@ -1,8 +1,8 @@
 import { eq } from "drizzle-orm";
 import type { Tx } from "@/db";
 import { trees, treeScope, treeVersions } from "@/db/schema";
-import type { Content } from "@/lib/content/catalogue";
-import { treeFileToGraphInput } from "@/lib/trees/file";
+import type { Content } from "@/db/seed/content";
+import { treeFileToGraphInput } from "@/lib/trees/file/convert";
 import { writeGraph } from "@/lib/trees/graph";
 
 /** Each demo tree as version 1, published. Returns tree slug → published version id. */

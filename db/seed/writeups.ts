@@ -4,7 +4,7 @@ import path from "node:path";
 import { eq } from "drizzle-orm";
 import type { Tx } from "@/db";
 import { writeupCauses, writeupFamilies, writeupParts, writeups } from "@/db/schema";
-import type { Content, Writeup } from "@/lib/content/catalogue";
+import type { Content, Writeup } from "@/db/seed/content";
 import { rasteriseSvg } from "@/lib/storage/images";
 import { storePhoto } from "@/lib/storage/uploads";
 import { uploadUrl } from "@/lib/storage/urls";

@@ -1,7 +1,6 @@
-import type { Role } from "@/db/schema";
-
-export type { Role };
-export const ALL_ROLES: readonly Role[] = ["admin", "lead", "senior", "tech", "trainee"];
+export const ROLES = ["admin", "lead", "senior", "tech", "trainee"] as const;
+export type Role = (typeof ROLES)[number];
+export const ALL_ROLES: readonly Role[] = ROLES;
 
 const STAFF: readonly Role[] = ["admin", "lead", "senior", "tech"];
 const WORKERS: readonly Role[] = ["admin", "senior", "tech"];

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { db } from "@/db";
 import { CAUSE_AREAS, causeParts, causes, parts, type CauseArea } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
-import { slugSchema } from "@/lib/content/tree-file";
+import { slugSchema } from "@/lib/trees/file/schema";
 import { AppError } from "@/lib/errors";
 import { sqlState } from "@/lib/trees/sql-state";
 

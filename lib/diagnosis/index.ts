@@ -23,6 +23,7 @@ export type {
   CalibrationBin,
   PathWalk,
 } from "./types";
+export { STRENGTHS } from "./types";
 export { DiagnosisError, type DiagnosisErrorCode } from "./errors";
 export { DEFAULT_WEIGHTS } from "./weights";
 export { scoreCauses } from "./score";

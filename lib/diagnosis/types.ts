@@ -1,4 +1,6 @@
-export type Strength = "rules_out" | "against" | "neutral" | "for" | "strong";
+/** The five evidence strengths, from "rules out" to "strong". */
+export const STRENGTHS = ["rules_out", "against", "neutral", "for", "strong"] as const;
+export type Strength = (typeof STRENGTHS)[number];
 
 /** A strength, or a raw non-negative weight; 0 rules the cause out. */
 export type Weight = Strength | number;

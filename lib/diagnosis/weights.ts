@@ -1,6 +1,6 @@
 import { DiagnosisError } from "./errors";
 import { isNonNegativeNumber } from "./guards";
-import type { Strength, Weight } from "./types";
+import { STRENGTHS, type Strength, type Weight } from "./types";
 
 export type WeightTable = Readonly<Record<Strength, number>>;
 
@@ -12,10 +12,8 @@ export const DEFAULT_WEIGHTS: WeightTable = {
   strong: 9,
 };
 
-const STRENGTHS = Object.keys(DEFAULT_WEIGHTS) as Strength[];
-
 export function isStrength(w: unknown): w is Strength {
-  return typeof w === "string" && (STRENGTHS as string[]).includes(w);
+  return typeof w === "string" && (STRENGTHS as readonly string[]).includes(w);
 }
 
 export function weightTable(overrides?: Partial<Record<Strength, number>>): WeightTable {

@@ -10,7 +10,7 @@ import { graphToDraft } from "@/lib/trees/draft";
 import { loadGraph, writeGraph } from "@/lib/trees/graph";
 import { setEvidence } from "@/lib/trees/ops";
 import { reviewVersion } from "./review";
-import { STRENGTH_LABELS } from "./strength";
+import { STRENGTH_LABELS } from "@/lib/trees/kinds";
 
 const id = z.coerce.number({ error: "No id given." }).int().positive("No id given.");
 const key = z.string().trim().min(1, "No answer given.").max(80);

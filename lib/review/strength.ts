@@ -1,14 +1,4 @@
-import { DEFAULT_WEIGHTS, type Strength } from "@/lib/diagnosis";
-
-export const STRENGTH_ORDER: readonly Strength[] = ["rules_out", "against", "neutral", "for", "strong"];
-
-export const STRENGTH_LABELS: Record<Strength, string> = {
-  rules_out: "rules out",
-  against: "against",
-  neutral: "neutral",
-  for: "for",
-  strong: "strong",
-};
+import { DEFAULT_WEIGHTS, STRENGTHS as STRENGTH_ORDER, type Strength } from "@/lib/diagnosis";
 
 export interface OptionEvidence {
   key: string;

@@ -1,4 +1,4 @@
-import { STRENGTH_LABELS } from "./strength";
+import { STRENGTH_LABELS } from "@/lib/trees/kinds";
 import type { SuggestionView } from "./types";
 
 const p2 = (x: number) => x.toFixed(2);

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { db, type Tx } from "@/db";
 import { motorFamilies, trees, treeScope, treeVersions, users } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
-import { slugSchema } from "@/lib/content/tree-file";
+import { slugSchema } from "@/lib/trees/file/schema";
 import { causeOptions } from "@/lib/catalogue/queries";
 import { AppError } from "@/lib/errors";
 import { sqlState } from "@/lib/trees/sql-state";

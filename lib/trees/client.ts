@@ -12,11 +12,3 @@ export interface TreeGraphResponse {
 /** SWR keys, exported so any component can revalidate them. */
 export const treeGraphKey = (treeId: number, version?: number) => `/api/trees/${treeId}${version ? `?version=${version}` : ""}`;
 
-export async function jsonFetcher<T>(url: string): Promise<T> {
-  const response = await fetch(url, { headers: { accept: "application/json" } });
-  if (!response.ok) {
-    const body = (await response.json().catch(() => ({}))) as { error?: string };
-    throw new Error(body.error ?? `Request failed (${response.status})`);
-  }
-  return (await response.json()) as T;
-}

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { slugSchema, strengthSchema } from "@/lib/content/tree-file";
+import { slugSchema, strengthSchema } from "@/lib/trees/file/schema";
 import { NODE_KINDS } from "./kinds";
 import type { GraphInput } from "./graph-types";
 

@@ -6,8 +6,8 @@ import { causes, motorFamilies, trees, treeScope, treeVersions } from "@/db/sche
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { sqlState } from "@/lib/trees/sql-state";
-import { parseTreeFileText, TREE_FILE_MAX_BYTES, type FileProblem, type TreeFile } from "@/lib/validation/tree-file";
-import { treeFileToGraphInput } from "./file";
+import { parseTreeFileText, TREE_FILE_MAX_BYTES, type FileProblem, type TreeFile } from "@/lib/trees/file/parse";
+import { treeFileToGraphInput } from "./file/convert";
 import { writeGraph } from "./graph";
 
 /** Problems only the database can see: causes and families the catalogue does not have, a slug taken. */

@@ -1,8 +1,15 @@
 import type { NodeKind, StrengthName } from "@/db/schema";
 
-// Copies of the schema's lists, so client code need not import the Drizzle schema module.
+// A copy of the schema's list, so client code need not import the Drizzle schema module.
 export const NODE_KINDS = ["question", "check", "cause", "caution"] as const satisfies readonly NodeKind[];
-export const STRENGTHS = ["rules_out", "against", "neutral", "for", "strong"] as const satisfies readonly StrengthName[];
+
+export const STRENGTH_LABELS: Record<StrengthName, string> = {
+  rules_out: "rules out",
+  against: "against",
+  neutral: "neutral",
+  for: "for",
+  strong: "strong",
+};
 
 export const KIND_LABELS: Record<NodeKind, string> = {
   question: "Question",

@@ -10,6 +10,7 @@ import { SESSION_COOKIE } from "@/lib/auth/lucia";
 import { createSession } from "@/lib/auth/session";
 import type { GraphInput } from "@/lib/trees/graph-types";
 import { writeGraph } from "@/lib/trees/graph";
+import { prng } from "@/lib/random";
 import { autoLayout } from "@/lib/trees/layout";
 
 const NODES = 300;
@@ -20,16 +21,6 @@ const BASE = process.env.BENCH_BASE_URL ?? "http://127.0.0.1:3200";
 const STRENGTHS = ["rules_out", "against", "for", "strong"] as const;
 
 /** mulberry32, so every run measures the same tree. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** 270 questions and checks (3 answers each, edges forward only) and 30 cause nodes, laid out by dagre. */
 function generateGraph(slugs: string[]): GraphInput {

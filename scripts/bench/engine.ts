@@ -1,7 +1,7 @@
 // Timing of the diagnosis engine on generated trees: `npx tsx scripts/bench/engine.ts`.
 // The trees are random but seeded, so every run measures the same work.
 import { rankNextQuestions, scoreCauses, type DxAnswer, type DxNode, type DxOption, type DxTree, type Strength } from "../../lib/diagnosis";
-import { prng } from "./support/prng";
+import { prng } from "@/lib/random";
 
 const SIZES = [300, 1000];
 const CAUSES = 60;

@@ -11,8 +11,8 @@ import { chromium } from "playwright-core";
 import { like } from "drizzle-orm";
 import { db, sql as pg } from "../../db";
 import { writeupCauses, writeupFamilies, writeupParts, writeups } from "../../db/schema";
-import { parseWriteup } from "../../lib/content/catalogue";
-import { prng } from "./support/prng";
+import { parseWriteup } from "../../db/seed/content";
+import { prng } from "@/lib/random";
 
 const BASE = process.env.BENCH_BASE_URL ?? "http://127.0.0.1:3200";
 const COUNT = Number(process.env.BENCH_WRITEUPS ?? 10_000);

@@ -5,7 +5,7 @@ import { asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { caseSteps, motorFamilies, treeScope, treeVersions, trees } from "@/db/schema";
 import { createSession } from "@/lib/auth/session";
-import { startCase } from "@/lib/cases/start";
+import { startCase } from "@/lib/triage/start";
 import { walkPath, type DxAnswer } from "@/lib/diagnosis";
 import { loadGraph, toDxTree, type TreeGraph } from "@/lib/trees/graph";
 

@@ -10,10 +10,10 @@ import { may } from "@/lib/auth/roles";
 import { loadShopReport } from "@/lib/reports";
 import { filterQuery, parseReportFilter } from "@/lib/reports/period";
 import { familyOptions } from "@/lib/reports/scope";
+import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Reports" };
 
-const dayLabel = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 export default async function ReportsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requireRole("reports:read", "/reports");
@@ -29,7 +29,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
       <div>
         <h1>Shop reports</h1>
         <p className="text-ink-soft" data-testid="report-scope">
-          Closed cases from {dayLabel.format(from)} to {dayLabel.format(new Date(to.getTime() - 1))}, {report.scope.familyName ?? "all motor families"}.
+          Closed cases from {formatDay(from)} to {formatDay(new Date(to.getTime() - 1))}, {report.scope.familyName ?? "all motor families"}.
         </p>
       </div>
       <ReportFilterBar

@@ -3,11 +3,11 @@ import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import type { ActionState } from "@/lib/actions/define";
 import { runAction } from "@/lib/actions/run";
-import { answerStepAction, type AnsweredStep } from "@/lib/cases/answer";
-import { finishCaseAction, type FinishedCase } from "@/lib/cases/finish";
-import { saveNotesAction } from "@/lib/cases/notes";
-import { startCaseAction } from "@/lib/cases/start";
-import { undoStepAction, type UndoneStep } from "@/lib/cases/undo";
+import { answerStepAction, type AnsweredStep } from "@/lib/triage/answer";
+import { finishCaseAction, type FinishedCase } from "@/lib/triage/finish";
+import { saveNotesAction } from "@/lib/triage/notes";
+import { startCaseAction } from "@/lib/triage/start";
+import { undoStepAction, type UndoneStep } from "@/lib/triage/undo";
 
 export async function startCase(_prev: ActionState<{ id: number; reference: string }>, form: FormData): Promise<ActionState<{ id: number; reference: string }>> {
   const result = await runAction(startCaseAction, form);

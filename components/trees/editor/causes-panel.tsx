@@ -4,6 +4,7 @@ import { addCauses, removeCause, setPriorWeight } from "@/lib/trees/ops";
 import { DRAFT_LIMITS } from "@/lib/trees/draft";
 import { useEditor } from "./editor-context";
 import { NumberInput, SmallButton } from "./inputs";
+import { percent } from "@/lib/format";
 
 /** The tree's causes with the editor's prior weights (normalised to shares, DESIGN §4). */
 export function CausesPanel() {
@@ -36,7 +37,7 @@ export function CausesPanel() {
                 <div className="mt-1 flex items-end gap-3">
                   <NumberInput label="Prior weight" value={c.priorWeight} min={0} max={DRAFT_LIMITS.priorWeight} step={0.5} disabled={readOnly}
                     onChange={(v) => edit((d) => setPriorWeight(d, c.slug, v), `prior:${c.slug}`)} />
-                  <span className="pb-1.5 font-mono text-xs text-ink-soft">{total > 0 ? `${((c.priorWeight / total) * 100).toFixed(0)}% of the listed` : "—"}</span>
+                  <span className="pb-1.5 font-mono text-xs text-ink-soft">{total > 0 ? `${percent(c.priorWeight / total)} of the listed` : "—"}</span>
                 </div>
               </li>
             );

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { clockTime } from "@/lib/trees/conflict";
+import { clockTime } from "@/lib/format";
 import { SmallButton } from "./inputs";
 
 export interface SaveStatus {

@@ -1,8 +1,7 @@
 "use client";
 import { useMemo } from "react";
 import { scoreCauses, type DxTree } from "@/lib/diagnosis";
-
-const pct = (p: number) => `${(p * 100).toFixed(p > 0 && p < 0.01 ? 1 : 0)}%`;
+import { percentFine } from "@/lib/format";
 
 /**
  * What the ranking would be after this one answer, next to the editor's priors. No shop history
@@ -36,11 +35,11 @@ export function ScorePreview({ dx, nodeKey, optionKey, nameOf }: {
           <li key={r.id} className="text-xs">
             <div className="flex justify-between gap-2">
               <span className={`truncate ${r.out ? "text-ink-faint line-through" : "text-ink"}`}>{r.name}</span>
-              <span className="shrink-0 font-mono">{r.out ? "ruled out" : pct(r.p)} <span className="text-ink-faint">({pct(r.before)})</span></span>
+              <span className="shrink-0 font-mono">{r.out ? "ruled out" : percentFine(r.p)} <span className="text-ink-faint">({percentFine(r.before)})</span></span>
             </div>
             <div className="relative mt-0.5 h-1.5 rounded bg-paper-deep">
-              <div className={`h-1.5 rounded ${r.id === "__unlisted" ? "bg-ink-faint" : "bg-copper"}`} style={{ width: pct(r.p) }} />
-              <div className="absolute top-[-2px] h-2.5 w-0.5 bg-ink" style={{ left: pct(r.before) }} aria-hidden="true" />
+              <div className={`h-1.5 rounded ${r.id === "__unlisted" ? "bg-ink-faint" : "bg-copper"}`} style={{ width: percentFine(r.p) }} />
+              <div className="absolute top-[-2px] h-2.5 w-0.5 bg-ink" style={{ left: percentFine(r.before) }} aria-hidden="true" />
             </div>
           </li>
         ))}

@@ -1,6 +1,6 @@
 "use client";
 import type { StrengthName } from "@/db/schema";
-import { STRENGTHS } from "@/lib/trees/kinds";
+import { STRENGTHS } from "@/lib/diagnosis";
 import { STRENGTH_STEPS } from "../strength-steps";
 
 /** Our own compact five-step control: a symbol per step, the word in its tooltip and for screen readers. */

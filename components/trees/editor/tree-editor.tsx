@@ -11,11 +11,12 @@ import useSWR from "swr";
 import { publishDraft, saveDraft } from "@/app/(shop)/trees/actions";
 import type { NodeKind } from "@/db/schema";
 import type { ActionFailure } from "@/lib/actions/define";
-import { jsonFetcher, treeGraphKey, type TreeGraphResponse } from "@/lib/trees/client";
+import { fetcher } from "@/lib/fetcher";
+import { treeGraphKey, type TreeGraphResponse } from "@/lib/trees/client";
 import { staleDraftMessage } from "@/lib/trees/conflict";
 import type { DraftGraph } from "@/lib/trees/draft";
 import { draftToDxTree } from "@/lib/trees/dx";
-import { graphToTreeFile } from "@/lib/trees/file";
+import { graphToTreeFile } from "@/lib/trees/file/convert";
 import { historyReducer, startHistory } from "@/lib/trees/history";
 import { NODE_HEIGHT, NODE_WIDTH, autoLayout, freeSpot } from "@/lib/trees/layout";
 import { addNode, addOption, moveNodes, removeNodes, removeOptions, updateOption } from "@/lib/trees/ops";
@@ -105,7 +106,7 @@ function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: Tre
   }, [flow, select]);
 
   // Someone else's save shows up here (polled) before this editor tries to save over it.
-  const { data: server } = useSWR<TreeGraphResponse>(readOnly ? null : treeGraphKey(tree.id), jsonFetcher, {
+  const { data: server } = useSWR<TreeGraphResponse>(readOnly ? null : treeGraphKey(tree.id), fetcher, {
     refreshInterval: 30_000, revalidateOnFocus: true, revalidateOnMount: false, dedupingInterval: 10_000,
   });
   const theirs = server && server.version.id === version.id && server.version.revision > saved.revision ? server : null;
@@ -149,7 +150,7 @@ function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: Tre
   const reload = useCallback(async () => {
     setReloading(true);
     try {
-      const fresh = await jsonFetcher<TreeGraphResponse>(treeGraphKey(tree.id));
+      const fresh = await fetcher<TreeGraphResponse>(treeGraphKey(tree.id));
       if (fresh.version.id !== version.id) { router.refresh(); return; }
       revisionRef.current = fresh.version.revision;
       dispatch({ type: "reset", present: fresh.graph });

@@ -1,5 +1,5 @@
 import type { Tx } from "@/db";
-import type { Content } from "@/lib/content/catalogue";
+import type { Content } from "@/db/seed/content";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import { insertHistory } from "./insert";

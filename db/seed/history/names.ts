@@ -1,4 +1,4 @@
-import type { Random } from "./random";
+import type { Random } from "@/lib/random";
 
 // Invented callers and dealers for the demo history; none is a real person or business.
 const FIRST = ["Alder", "Brin", "Cassia", "Dorrit", "Elsbeth", "Fenn", "Greer", "Hollis", "Ivo", "Jory", "Kestrel", "Linnea",

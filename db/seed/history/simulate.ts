@@ -1,10 +1,10 @@
 import { DEFAULT_WEIGHTS, benchPlan, rankNextQuestions, scoreCauses, suggestConclusion, walkPath } from "@/lib/diagnosis";
 import type { DxAnswer, DxOption, DxSettings, DxTree, Strength } from "@/lib/diagnosis";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { finalRankingOf } from "@/lib/cases/ranking-types";
-import type { Cause, Scenario } from "@/lib/content/catalogue";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { finalRankingOf } from "@/lib/triage/ranking-types";
+import type { Cause, Scenario } from "@/db/seed/content";
 import { callerContact, callerName, serialFor } from "./names";
-import { Random } from "./random";
+import { Random } from "@/lib/random";
 
 export interface SimTree {
   slug: string;

@@ -7,7 +7,7 @@ import { createSession } from "@/lib/auth/session";
 import { createUser, db } from "../../support/db";
 import { params, request } from "../../support/requests";
 import { resetToDemo } from "../../support/seed";
-import { familyId, startTestCase } from "./helpers";
+import { familyId, startTestCase } from "../triage/helpers";
 
 describe("GET /api/cases", () => {
   let token: string;

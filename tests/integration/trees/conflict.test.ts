@@ -5,7 +5,7 @@ import { treeVersions } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { publishDraftAction } from "@/lib/trees/actions";
-import { clockTime } from "@/lib/trees/conflict";
+import { clockTime } from "@/lib/format";
 import { graphToDraft } from "@/lib/trees/draft";
 import { loadGraph } from "@/lib/trees/graph";
 import { updateNode } from "@/lib/trees/ops";

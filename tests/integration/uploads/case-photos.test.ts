@@ -10,7 +10,7 @@ import { createSession } from "@/lib/auth/session";
 import { countRows, createUser, db } from "../../support/db";
 import { params, request } from "../../support/requests";
 import { resetToDemo } from "../../support/seed";
-import { startTestCase } from "../cases/helpers";
+import { startTestCase } from "../triage/helpers";
 
 const uploadDir = mkdtempSync(path.join(os.tmpdir(), "rootbench-case-photos-"));
 let png: Buffer;

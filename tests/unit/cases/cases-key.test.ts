@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { casesKey, queryFromParams } from "@/lib/cases/cases-key";
 import { caseListQuery } from "@/lib/cases/list-query";
-import { parseDiagnosisSettings } from "@/lib/cases/dx-settings";
+import { parseDiagnosisSettings } from "@/lib/triage/dx-settings";
 
 describe("case list keys and query", () => {
   it("leave defaults out, so the server's parsed query and the URL give the same SWR key", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { causeAreaSchema, referenceProblems, roleSchema } from "@/lib/content/catalogue";
+import { causeAreaSchema, referenceProblems, roleSchema } from "@/db/seed/content";
 import { content } from "./load";
 
 describe("demo catalogue", () => {

@@ -1,5 +1,5 @@
 import path from "node:path";
-import { loadContent, type Content } from "@/lib/content/catalogue";
+import { loadContent, type Content } from "@/db/seed/content";
 
 export const contentDir = path.resolve(__dirname, "../../../content");
 

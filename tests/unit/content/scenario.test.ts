@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { DEFAULT_WEIGHTS } from "@/lib/diagnosis";
-import type { TreeFile } from "@/lib/content/tree-file";
+import type { TreeFile } from "@/lib/trees/file/schema";
 import { content } from "./load";
 
 const sum = (xs: number[]) => xs.reduce((s, x) => s + x, 0);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { validateTree } from "@/lib/diagnosis";
-import { treeFileSchema, treeFileToDxTree } from "@/lib/content/tree-file";
+import { treeFileSchema, treeFileToDxTree } from "@/lib/trees/file/schema";
 import { content } from "./load";
 
 const SYMPTOM_TREES = ["clicking-under-load", "pedal-slip", "grinding-noise", "water-cutout", "weak-assist", "no-power"];

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { TopHits } from "@/lib/search/top-hits";
 import type { SearchDoc } from "@/lib/search/types";
 import { FIELD_BOOSTS, fuzzyDistance, MINI_OPTIONS, serializeIndex, WriteupIndex } from "@/lib/search/writeup-index";
-import { prng } from "../../../scripts/bench/support/prng";
+import { prng } from "@/lib/random";
 import { doc } from "./docs";
 
 const FIELDS = MINI_OPTIONS.fields;

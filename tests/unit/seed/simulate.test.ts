@@ -2,8 +2,8 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { simulateHistory, type SimCase } from "@/db/seed/history/simulate";
 import { learnLikelihoods, rankingScores, validateTree } from "@/lib/diagnosis";
-import { loadContent } from "@/lib/content/catalogue";
-import { treeFileToDxTree } from "@/lib/content/tree-file";
+import { loadContent } from "@/db/seed/content";
+import { treeFileToDxTree } from "@/lib/trees/file/schema";
 
 const content = loadContent(path.resolve(__dirname, "../../../content"));
 const trees = content.trees.map((t) => ({ slug: t.slug, symptom: t.symptom, dx: treeFileToDxTree(t, content.causes) }));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { NODE_HEIGHT, NODE_WIDTH, autoLayout, freeSpot } from "@/lib/trees/layout";
-import { treeFileToGraphInput } from "@/lib/trees/file";
+import { treeFileToGraphInput } from "@/lib/trees/file/convert";
 import { content } from "../content/load";
 
 describe("automatic layout", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { treeProblems } from "@/lib/trees/problems";
-import { treeFileToGraphInput } from "@/lib/trees/file";
+import { treeFileToGraphInput } from "@/lib/trees/file/convert";
 import { content } from "../content/load";
 import { CATALOGUE, node, option, smallTree } from "./fixtures";
 

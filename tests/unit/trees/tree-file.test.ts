@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { graphToTreeFile, treeFileToGraphInput } from "@/lib/trees/file";
-import { parseTreeFileText } from "@/lib/validation/tree-file";
+import { graphToTreeFile, treeFileToGraphInput } from "@/lib/trees/file/convert";
+import { parseTreeFileText } from "@/lib/trees/file/parse";
 import { content } from "../content/load";
 
 const demo = () => content().trees.find((t) => t.slug === "pedal-slip")!;

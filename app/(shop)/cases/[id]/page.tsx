@@ -10,10 +10,10 @@ import { TriageSummary } from "@/components/cases/triage-summary";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
 import { may } from "@/lib/auth/roles";
-import { causesBySlug } from "@/lib/cases/catalogue";
+import { causesBySlug } from "@/lib/triage/catalogue";
 import { caseEventRows, caseHeader, caseStepRows } from "@/lib/cases/queries";
-import type { StoredRanking } from "@/lib/cases/ranking-types";
-import { publishedTree } from "@/lib/cases/tree-cache";
+import type { StoredRanking } from "@/lib/triage/ranking-types";
+import { publishedTree } from "@/lib/triage/tree-cache";
 import { caseMail } from "@/lib/mail/outbox";
 
 export const metadata: Metadata = { title: "Case" };

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
 import { WalkScreen } from "@/components/triage/walk-screen";
 import { requireRole } from "@/lib/auth/require-role";
-import { loadWalk } from "@/lib/cases/walk-data";
+import { loadWalk } from "@/lib/triage/walk-data";
 
 export const metadata: Metadata = { title: "Triage" };
 

@@ -1,11 +1,11 @@
 import type { z } from "zod";
 import type { ActionSpec } from "@/lib/actions/define";
 import type { Role } from "@/lib/auth/roles";
-import { answerStepAction } from "@/lib/cases/answer";
-import { finishCaseAction } from "@/lib/cases/finish";
-import { saveNotesAction } from "@/lib/cases/notes";
-import { startCaseAction } from "@/lib/cases/start";
-import { undoStepAction } from "@/lib/cases/undo";
+import { answerStepAction } from "@/lib/triage/answer";
+import { finishCaseAction } from "@/lib/triage/finish";
+import { saveNotesAction } from "@/lib/triage/notes";
+import { startCaseAction } from "@/lib/triage/start";
+import { undoStepAction } from "@/lib/triage/undo";
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;

@@ -5,7 +5,7 @@ import { reopenCaseAction, saveOutcomeAction, startBenchAction } from "@/lib/out
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
-const FILE = "app/(shop)/reports/_actions/outcomes/actions.ts";
+const FILE = "app/(shop)/cases/[id]/actions.ts";
 // DESIGN §2: tech, senior (and admin) record bench outcomes; reopening a closed case is for senior and admin.
 const WORKERS: readonly Role[] = ["admin", "senior", "tech"];
 const EDITORS: readonly Role[] = ["admin", "senior"];

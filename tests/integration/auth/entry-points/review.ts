@@ -5,7 +5,7 @@ import { acceptSuggestionAction, setLikelihoodModeAction } from "@/lib/review/ac
 import type { EntryPointRows } from "../entry-points";
 
 type AnySpec = ActionSpec<z.ZodType, unknown>;
-const FILE = "app/(shop)/reports/_actions/review/actions.ts";
+const FILE = "app/(shop)/trees/[id]/actions.ts";
 // DESIGN §2: editing trees (and so accepting evidence into a draft, and the likelihood setting) is senior and admin work.
 const EDITORS: readonly Role[] = ["admin", "senior"];
 

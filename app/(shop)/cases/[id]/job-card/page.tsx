@@ -6,9 +6,9 @@ import { JobCard } from "@/components/cases/job-card";
 import { PrintButton } from "@/components/cases/print-button";
 import { EmptyState } from "@/components/ui/empty-state";
 import { requireRole } from "@/lib/auth/require-role";
-import { causesBySlug } from "@/lib/cases/catalogue";
+import { causesBySlug } from "@/lib/triage/catalogue";
 import { caseHeader } from "@/lib/cases/queries";
-import { publishedTree } from "@/lib/cases/tree-cache";
+import { publishedTree } from "@/lib/triage/tree-cache";
 import { requestOrigin } from "@/lib/http/origin";
 
 export const metadata: Metadata = { title: "Job card" };

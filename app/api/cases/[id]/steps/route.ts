@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { executeAction } from "@/lib/actions/define";
-import { answerStepAction } from "@/lib/cases/answer";
+import { answerStepAction } from "@/lib/triage/answer";
 import { jsonError, route } from "@/lib/http/route";
 
 /**

@@ -1,11 +1,11 @@
 import { NextResponse } from "next/server";
 import { route } from "@/lib/http/route";
 import { versionFor } from "@/lib/trees/access";
-import { graphToTreeFile } from "@/lib/trees/file";
+import { graphToTreeFile } from "@/lib/trees/file/convert";
 import { loadGraph } from "@/lib/trees/graph";
 import { treeDetail } from "@/lib/trees/queries";
 
-/** A version as a tree file (lib/validation/tree-file.md), downloaded as `<slug>-v<N>.json`. */
+/** A version as a tree file (lib/trees/file/format.md), downloaded as `<slug>-v<N>.json`. */
 export const GET = route<{ id: string }>("tree:read", async (request, { user, params }) => {
   const { tree, version } = await versionFor(user, params.id, request.nextUrl.searchParams.get("version"));
   const [graph, detail] = await Promise.all([loadGraph(version.id), treeDetail(tree.id)]);
