@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { currentSession } from "@/lib/auth/session";
 import "./globals.css";
 
 const sans = localFont({
@@ -20,9 +21,10 @@ export const metadata: Metadata = {
   icons: { icon: [{ url: "/favicon.ico", sizes: "any" }, { url: "/icon.svg", type: "image/svg+xml" }] },
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  const theme = (await currentSession())?.theme;
   return (
-    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+    <html lang="en" className={`${sans.variable} ${mono.variable}`} data-theme={theme === "dark" ? "dark" : undefined}>
       <body>{children}</body>
     </html>
   );

@@ -3,10 +3,12 @@ import { may, ROLE_LABELS } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { signOut } from "@/app/(auth)/sign-in/actions";
 import { HeaderSearch } from "@/components/search/header-search";
+import type { Theme } from "@/db/schema";
 import { NAV_ITEMS } from "./nav-items";
+import { ThemeSwitch } from "./theme-switch";
 import { HeaderBar } from "./header-bar";
 
-export function AppHeader({ user }: { user: SessionUser }) {
+export function AppHeader({ user, theme }: { user: SessionUser; theme: Theme }) {
   const items = NAV_ITEMS.filter((item) => may(user.role, item.capability));
   const searches = may(user.role, "writeup:read");
   const account = (
@@ -14,6 +16,7 @@ export function AppHeader({ user }: { user: SessionUser }) {
       <span data-testid="signed-in-as" className="leading-tight">
         {user.name} · <span className="text-on-bar-accent">{ROLE_LABELS[user.role]}</span>
       </span>
+      <ThemeSwitch theme={theme} />
       <form action={signOut}>
         <button type="submit" className="min-h-9 whitespace-nowrap rounded border border-on-bar/50 px-2 py-1 text-on-bar hover:bg-on-bar/10">Sign out</button>
       </form>

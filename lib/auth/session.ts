@@ -3,6 +3,7 @@ import { cookies } from "next/headers";
 import { cache } from "react";
 import { hashToken, newSessionToken } from "./token";
 import { lucia, SESSION_COOKIE } from "./lucia";
+import type { Theme } from "@/db/schema";
 import type { SessionUser } from "./session-user";
 
 export type { SessionUser };
@@ -11,6 +12,8 @@ export interface ValidatedSession {
   user: SessionUser;
   sessionId: string;
   fresh: boolean;
+  /** The screen theme the person chose (kept with the account, read with the session). */
+  theme: Theme;
 }
 
 /** Looks a cookie token up; the database only ever sees its hash. Inactive users have no session. */
@@ -26,6 +29,7 @@ export async function validateToken(token: string | undefined | null): Promise<V
     user: { id: user.id, email: user.email, name: user.name, role: user.role },
     sessionId: session.id,
     fresh: session.fresh,
+    theme: user.theme,
   };
 }
 

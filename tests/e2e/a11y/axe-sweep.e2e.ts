@@ -14,6 +14,8 @@ const WIDTHS = [
   { name: "tablet", width: 820, height: 1180 },
   { name: "phone", width: 390, height: 844 },
 ] as const;
+// Up to 25 screens, three axe-core runs each, on a shared machine.
+const SWEEP_TIMEOUT_MS = 600_000;
 /** The role whose screens are photographed at the tablet and phone widths (it sees all four). */
 const PHOTOGRAPHED_ROLE = "tech";
 
@@ -50,13 +52,14 @@ describe.each(ALL_ROLES)("WCAG 2.1 AA sweep as %s", (role) => {
         const problems = await axeViolations(page);
         if (screen.touchArea) problems.push(...(await smallTargets(page, screen.touchArea)).map((t) => `target under 44 px: ${t}`));
         if (await headerOverflows(page)) problems.push("the header row overflows");
+        if (await pageOverflows(page)) problems.push("the page is wider than the screen (WCAG 1.4.10 Reflow): a table or row does not scroll or reflow");
         if (problems.length) found[`${screen.name} at ${width} px`] = problems;
         if (screen.photographed && role === PHOTOGRAPHED_ROLE && name !== "desktop") await screenshot(page, `a11y-${name}-${screen.name.replace(/ /g, "-")}`);
       }
     }
     expect(found).toEqual({});
     expect(browser.errors).toEqual([]);
-  });
+  }, SWEEP_TIMEOUT_MS);
 });
 
 // A resize reaches React through ResizeObserver and media queries: let two frames pass.
@@ -67,4 +70,9 @@ function afterLayout(page: Browser["page"]): Promise<void> {
 // The header is one row: its content never needs more width than the row has, and it is one line tall.
 function headerOverflows(page: Browser["page"]): Promise<boolean> {
   return page.locator("header > div").first().evaluate((row) => row.scrollWidth > row.clientWidth || row.getBoundingClientRect().height > 72);
+}
+
+// Content reflows to the screen's width; only a named scroll region (a wide table) may scroll sideways.
+function pageOverflows(page: Browser["page"]): Promise<boolean> {
+  return page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth);
 }

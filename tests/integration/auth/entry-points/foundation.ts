@@ -3,6 +3,7 @@ import type { ActionSpec } from "@/lib/actions/define";
 import type { Role } from "@/lib/auth/roles";
 import { signInAction } from "@/lib/auth/sign-in";
 import { addUserAction, changeRoleAction, setActiveAction } from "@/lib/users/actions";
+import { setThemeAction } from "@/lib/users/theme";
 import { TEST_PASSWORD } from "../../../support/db";
 import type { EntryPointRows } from "../entry-points";
 
@@ -30,6 +31,10 @@ export const rows: EntryPointRows = {
   {
     file: "app/(shop)/users/actions.ts", exportName: "setActive", spec: setActiveAction as AnySpec, allowed: MANAGERS,
     sample: ({ target }) => ({ userId: target.id, active: "true" }),
+  },
+  {
+    file: "app/(shop)/actions.ts", exportName: "setTheme", spec: setThemeAction as AnySpec, allowed: ALL,
+    sample: () => ({ theme: "dark" }),
   },
 ],
   routes: [
