@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
 import { connection } from "next/server";
+import { currentSession } from "@/lib/auth/session";
 import "./globals.css";
 
 const sans = localFont({
@@ -24,8 +25,9 @@ export const metadata: Metadata = {
 export default async function RootLayout({ children }: { children: React.ReactNode }) {
   // Every page renders per request, so each carries the nonce of its own Content-Security-Policy.
   await connection();
+  const theme = (await currentSession())?.theme;
   return (
-    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+    <html lang="en" className={`${sans.variable} ${mono.variable}`} data-theme={theme === "dark" ? "dark" : undefined}>
       <body>{children}</body>
     </html>
   );

@@ -25,6 +25,9 @@ const inList = (values: readonly string[]) => sql.raw(values.map((v) => `'${v}'`
 
 /* ---------- people and sign-in ---------- */
 
+export const THEMES = ["light", "dark"] as const;
+export type Theme = (typeof THEMES)[number];
+
 export const users = pgTable(
   "users",
   {
@@ -34,11 +37,14 @@ export const users = pgTable(
     role: text("role").$type<Role>().notNull(),
     passwordHash: text("password_hash").notNull(),
     active: boolean("active").notNull().default(true),
+    /** The screen theme this person chose: the light palette or the high-contrast dark workshop one. */
+    theme: text("theme").$type<Theme>().notNull().default("light"),
     createdAt: createdAt(),
   },
   (t) => [
     uniqueIndex("users_email_key").on(t.email),
     check("users_role_check", sql`${t.role} in (${inList(ROLES)})`),
+    check("users_theme_check", sql`${t.theme} in (${inList(THEMES)})`),
   ],
 );
 export type User = typeof users.$inferSelect;

@@ -36,6 +36,17 @@ ensure_chromium() {
   fi
 }
 
+# The job-card test turns the printed PDF into an image with Debian's poppler-utils.
+ensure_poppler() {
+  if ! command -v pdftoppm >/dev/null 2>&1; then
+    echo "[setup] installing Debian's poppler-utils for the job-card test"
+    if ! DEBIAN_FRONTEND=noninteractive apt-get install -y --no-install-recommends poppler-utils >/tmp/rootbench-apt.log 2>&1; then
+      apt-get update >>/tmp/rootbench-apt.log 2>&1
+      DEBIAN_FRONTEND=noninteractive apt-get install -y --no-install-recommends poppler-utils >>/tmp/rootbench-apt.log 2>&1
+    fi
+  fi
+}
+
 db_url_for() { # cluster port name
   echo "postgres://rootbench:${DB_PASSWORD:-rootbench}@127.0.0.1:$2/$3"
 }

@@ -9,6 +9,7 @@ results=$(mktemp -d)
 
 ensure_node_modules
 ensure_chromium
+ensure_poppler
 
 stop_on_exit
 export DB_CLUSTER=test DB_PORT=${TEST_DB_PORT:-}

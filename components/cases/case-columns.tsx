@@ -24,6 +24,6 @@ export const caseColumns = [
   col.accessor("technicianName", { id: "technician", header: "Technician", cell: (c) => c.getValue() ?? "—" }),
   col.accessor("likelyCause", {
     id: "likely", header: "Likely at triage", enableSorting: false,
-    cell: (c) => c.getValue() ? <>{c.getValue()} <span className="text-xs text-ink-faint">{percent(c.row.original.likelyProbability ?? 0)}</span></> : <span className="text-ink-faint">—</span>,
+    cell: (c) => c.getValue() ? <>{c.getValue()} <span className="whitespace-nowrap text-xs text-ink-faint">{percent(c.row.original.likelyProbability ?? 0)}</span></> : <span className="text-ink-faint">—</span>,
   }),
 ];

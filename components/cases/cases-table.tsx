@@ -8,6 +8,7 @@ import { caseQueryParams, casesKey, DEFAULT_PAGE_SIZE, queryFromParams, type Cas
 import { fetcher } from "@/lib/fetcher";
 import { caseColumns, SORTABLE } from "./case-columns";
 import { CaseFilters, type FilterChoices } from "./case-filters";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const PAGE_SIZES = [10, 25, 50, 100];
 
@@ -56,7 +57,7 @@ export function CasesTable({ fallback, fallbackKey, choices }: { fallback: CaseL
     <div className="flex flex-col gap-4">
       <CaseFilters query={query} choices={choices} onChange={update} />
       {error ? <p role="alert" className="rounded-md bg-danger-light p-3 text-danger">{error instanceof Error ? error.message : "The cases could not be loaded."}</p> : null}
-      <div className="overflow-x-auto rounded-lg border border-ink-faint/30 bg-white" aria-busy={isLoading || isValidating}>
+      <ScrollRegion label="Cases" className="overflow-x-auto rounded-lg border border-ink-faint/30 bg-white" aria-busy={isLoading || isValidating}>
         <table className="w-full text-left text-sm" data-testid="cases-table">
           <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
             {table.getHeaderGroups().map((group) => (
@@ -87,7 +88,7 @@ export function CasesTable({ fallback, fallbackKey, choices }: { fallback: CaseL
           </tbody>
         </table>
         {data && data.rows.length === 0 ? <div className="p-4"><EmptyState title="No cases match these filters." /></div> : null}
-      </div>
+      </ScrollRegion>
       <div className="flex flex-wrap items-center justify-between gap-3 text-sm">
         <p className="text-ink-soft" data-testid="cases-count">{data ? `${data.total} case${data.total === 1 ? "" : "s"} · page ${page} of ${pageCount}` : "Loading…"}</p>
         <div className="flex items-center gap-2">

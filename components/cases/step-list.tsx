@@ -30,9 +30,9 @@ export function StepList({ steps, nameOf, titleOf }: { steps: StepView[]; nameOf
                 <p className="font-medium">Ranking shown</p>
                 <ul>
                   {s.ranking.causes.filter((c) => c.probability > 0).slice(0, 6).map((c) => (
-                    <li key={c.causeId} className="flex justify-between gap-2"><span>{nameOf(c.causeId)}</span><span className="font-mono">{percent(c.probability)}</span></li>
+                    <li key={c.causeId} className="flex justify-between gap-2"><span>{nameOf(c.causeId)}</span><span className="whitespace-nowrap font-mono">{percent(c.probability)}</span></li>
                   ))}
-                  <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="font-mono">{percent(s.ranking.unlisted)}</span></li>
+                  <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="whitespace-nowrap font-mono">{percent(s.ranking.unlisted)}</span></li>
                 </ul>
               </div>
               <div>

@@ -17,8 +17,8 @@ export function TriageSummary({ kase, nameOf, teardown }: {
       <div>
         <p className="font-medium">Ranking at the end of the call</p>
         <ul>
-          {ranking.map(([slug, p]) => <li key={slug} className="flex justify-between gap-2"><span>{nameOf(slug)}</span><span className="font-mono">{percent(p)}</span></li>)}
-          <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="font-mono">{percent(kase.finalRanking?.unlisted ?? 0)}</span></li>
+          {ranking.map(([slug, p]) => <li key={slug} className="flex justify-between gap-2"><span>{nameOf(slug)}</span><span className="whitespace-nowrap font-mono">{percent(p)}</span></li>)}
+          <li className="flex justify-between gap-2 text-ink-soft"><span>None of the listed</span><span className="whitespace-nowrap font-mono">{percent(kase.finalRanking?.unlisted ?? 0)}</span></li>
         </ul>
       </div>
       <div>

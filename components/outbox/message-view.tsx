@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { OutboxMessage } from "@/db/schema";
 import { MailStatus } from "./mail-status";
 import { RetryButton } from "./retry-button";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const when = (d: Date | null) => (d ? `${d.toISOString().slice(0, 19).replace("T", " ")} UTC` : "—");
 
@@ -25,7 +26,9 @@ export function MessageView({ message }: { message: OutboxMessage & { caseRefere
       {message.htmlBody ? (
         <details>
           <summary className="cursor-pointer text-sm font-semibold text-ink-soft">HTML version (source)</summary>
-          <pre className="mt-1 max-h-96 overflow-auto whitespace-pre-wrap rounded-md border border-ink-faint/30 bg-white p-3 font-mono text-xs">{message.htmlBody}</pre>
+          <ScrollRegion label="HTML source" className="mt-1 max-h-96 overflow-auto rounded-md border border-ink-faint/30 bg-white">
+            <pre className="whitespace-pre-wrap p-3 font-mono text-xs">{message.htmlBody}</pre>
+          </ScrollRegion>
         </details>
       ) : null}
     </div>

@@ -3,6 +3,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import type { OutboxRow } from "@/lib/mail/outbox";
 import { MailStatus } from "./mail-status";
 import { RetryButton } from "./retry-button";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const when = (d: Date | null) => (d ? d.toISOString().slice(0, 16).replace("T", " ") : "—");
 
@@ -10,7 +11,7 @@ const when = (d: Date | null) => (d ? d.toISOString().slice(0, 16).replace("T", 
 export function OutboxTable({ rows }: { rows: OutboxRow[] }) {
   if (rows.length === 0) return <EmptyState title="The outbox is empty.">Summaries to callers appear here when a triage is finished.</EmptyState>;
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Outbox messages" className="overflow-x-auto">
       <table className="w-full text-left text-sm" data-testid="outbox-table">
         <thead className="text-xs uppercase tracking-wide text-ink-soft">
           <tr><th className="px-2 py-1">Queued (UTC)</th><th className="px-2 py-1">To</th><th className="px-2 py-1">Subject</th><th className="px-2 py-1">Case</th><th className="px-2 py-1">Status</th><th className="px-2 py-1">Attempts</th><th className="px-2 py-1">Next try / sent</th><th className="px-2 py-1" /></tr>
@@ -30,6 +31,6 @@ export function OutboxTable({ rows }: { rows: OutboxRow[] }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

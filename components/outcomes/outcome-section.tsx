@@ -73,7 +73,7 @@ export async function OutcomeSection({ caseId, user }: { caseId: number; user: S
 
   return (
     <Panel title="Bench outcome">
-      <div className="flex flex-col gap-4" data-testid="outcome-section">
+      <div className="touch-targets flex flex-col gap-4" data-testid="outcome-section">
         <RepeatFlag serial={view.serial} links={view.repeats} />
         {body}
         {view.reopenings.length ? (

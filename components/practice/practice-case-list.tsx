@@ -2,6 +2,7 @@ import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { formatDay } from "@/lib/format";
 import type { PracticeCaseRow } from "@/lib/practice/queries";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const RIDING: Record<string, string> = { road: "road", trail: "trail", cargo: "cargo", commuting: "commuting" };
 
@@ -10,7 +11,7 @@ export function PracticeCaseList({ rows }: { rows: PracticeCaseRow[] }) {
     return <EmptyState title="No closed cases to practise on yet.">Cases appear here once they are closed with a confirmed cause.</EmptyState>;
   }
   return (
-    <div className="overflow-x-auto rounded-lg border border-ink-faint/30 bg-white">
+    <ScrollRegion label="Closed cases to practise on" className="overflow-x-auto rounded-lg border border-ink-faint/30 bg-white">
       <table className="w-full text-sm" data-testid="practice-cases">
         <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-soft">
           <tr>
@@ -40,6 +41,6 @@ export function PracticeCaseList({ rows }: { rows: PracticeCaseRow[] }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

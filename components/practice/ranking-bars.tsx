@@ -12,7 +12,7 @@ export function RankingBars({ ranking, limit = 6 }: { ranking: RankingView; limi
           <li key={c.slug}>
             <div className="flex items-baseline justify-between gap-2 text-sm">
               <span className={i === 0 ? "font-semibold" : ""}>{c.name}</span>
-              <span className="font-mono text-xs text-ink-soft">{percentFine(c.probability)}</span>
+              <span className="whitespace-nowrap font-mono text-xs text-ink-soft">{percentFine(c.probability)}</span>
             </div>
             <div className="mt-0.5 h-2 rounded-full bg-paper-deep" aria-hidden="true">
               <div className={`h-2 rounded-full ${i === 0 ? "bg-copper" : "bg-ink-faint"}`} style={{ width: `${Math.max(1, c.probability * 100)}%` }} />

@@ -50,14 +50,14 @@ export function AccuracySection({ accuracy, selectedVersionId, linkFor }: {
       <h3 className="mt-5 font-medium" id="calibration">Calibration: {selected.treeTitle}, version {selected.versionNumber}</h3>
       <p className="mb-2 text-sm text-ink-soft">Cases grouped by the probability the tree gave its top cause. A well-calibrated tree is right about as often as it says.</p>
       <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <CalibrationChart points={bins.map((b) => ({ bin: `${Math.round(b.from * 100)}–${Math.round(b.to * 100)} %`, n: b.n, predicted: b.meanPredicted * 100, observed: b.observed * 100 }))} />
+        <CalibrationChart points={bins.map((b) => ({ bin: `${Math.round(b.from * 100)}–${Math.round(b.to * 100)}\u00a0%`, n: b.n, predicted: b.meanPredicted * 100, observed: b.observed * 100 }))} />
         <NumberTable
           caption="Calibration table"
           testId="calibration-table"
           rows={selected.scores.calibration}
           rowKey={(b) => String(b.from)}
           columns={[
-            { key: "bin", label: "Top probability", cell: (b) => `${Math.round(b.from * 100)}–${Math.round(b.to * 100)} %` },
+            { key: "bin", label: "Top probability", cell: (b) => `${Math.round(b.from * 100)}–${Math.round(b.to * 100)}\u00a0%` },
             { key: "n", label: "Cases", numeric: true, cell: (b) => b.n },
             { key: "p", label: "Mean predicted", numeric: true, cell: (b) => (b.n ? pct(b.meanPredicted) : "—") },
             { key: "o", label: "Confirmed", numeric: true, cell: (b) => (b.n ? pct(b.observed) : "—") },

@@ -2,6 +2,7 @@
 import Link from "next/link";
 import { useRef, useState } from "react";
 import type { ImportPreview } from "@/lib/csv/preview";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 type Stage =
   | { kind: "idle" }
@@ -88,7 +89,7 @@ export function ImportPanel() {
               {preview.unusedColumns.length ? ` Columns not used: ${preview.unusedColumns.join(", ")}.` : ""}
             </p>
             {preview.problems.length ? (
-              <div className="max-h-80 overflow-y-auto rounded-md border border-ink-faint/30">
+              <ScrollRegion label="Problems found in the file" className="max-h-80 overflow-y-auto rounded-md border border-ink-faint/30">
                 <table className="w-full text-left text-sm" data-testid="import-problems">
                   <caption className="sr-only">Problems found in the file</caption>
                   <thead className="sticky top-0 bg-paper-deep text-xs uppercase tracking-wide text-ink-faint">
@@ -105,7 +106,7 @@ export function ImportPanel() {
                   </tbody>
                 </table>
                 {preview.problemCount > preview.problems.length ? <p className="p-2 text-xs text-ink-faint">…and {preview.problemCount - preview.problems.length} more.</p> : null}
-              </div>
+              </ScrollRegion>
             ) : null}
             <div className="flex flex-wrap items-center gap-3">
               {preview.valid > 0 && preview.token && file ? (

@@ -1,3 +1,4 @@
+import { ScrollRegion } from "@/components/ui/scroll-region";
 /** The numbers behind a chart: a compact table, numeric columns right-aligned. */
 export interface Column<R> {
   key: string;
@@ -14,7 +15,7 @@ export function NumberTable<R>({ caption, columns, rows, rowKey, testId }: {
   testId?: string;
 }) {
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label={caption} className="overflow-x-auto">
       <table className="w-full text-left text-sm" data-testid={testId}>
         <caption className="sr-only">{caption}</caption>
         <thead className="border-b border-ink-faint/40 text-xs uppercase tracking-wide text-ink-faint">
@@ -30,6 +31,6 @@ export function NumberTable<R>({ caption, columns, rows, rowKey, testId }: {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

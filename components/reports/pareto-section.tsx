@@ -4,6 +4,7 @@ import type { Pareto } from "@/lib/reports/pareto";
 import { interval, pct, whole } from "@/lib/format";
 import { NumberTable } from "./number-table";
 import { ParetoChart } from "./pareto-chart";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const CHART_CAUSES = 15;
 
@@ -24,7 +25,7 @@ export function ParetoSection({ pareto }: { pareto: Pareto }) {
       </p>
       <div className="grid gap-6 2xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <ParetoChart points={points} />
-        <div className="max-h-96 overflow-y-auto">
+        <ScrollRegion label="Confirmed causes, all rows" className="max-h-96 overflow-y-auto">
           <NumberTable
             caption="Confirmed causes in Pareto order"
             testId="pareto-table"
@@ -39,7 +40,7 @@ export function ParetoSection({ pareto }: { pareto: Pareto }) {
               { key: "cum", label: "Cumulative", numeric: true, cell: (r) => pct(r.cumulative) },
             ]}
           />
-        </div>
+        </ScrollRegion>
       </div>
     </Panel>
   );

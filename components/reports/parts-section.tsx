@@ -4,6 +4,7 @@ import type { PartsDemand } from "@/lib/reports/parts";
 import { monthLabels, PARTIAL_MONTH_NOTE, whole } from "@/lib/format";
 import { NumberTable } from "./number-table";
 import { PartsChart } from "./parts-chart";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const CHART_PARTS = 6;
 
@@ -20,7 +21,7 @@ export function PartsSection({ demand, period }: { demand: PartsDemand; period: 
       <p className="mb-3 text-sm text-ink-soft">Parts replaced on closed cases, per month, to plan stock. The chart stacks the {top.length} most used; the table lists every part.{partial ? ` ${PARTIAL_MONTH_NOTE}` : ""}</p>
       <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <PartsChart months={months} parts={top} />
-        <div className="max-h-80 overflow-y-auto">
+        <ScrollRegion label="Parts replaced, all rows" className="max-h-80 overflow-y-auto">
           <NumberTable
             caption="Parts replaced in the period"
             testId="parts-table"
@@ -33,7 +34,7 @@ export function PartsSection({ demand, period }: { demand: PartsDemand; period: 
               { key: "month", label: "Per month", numeric: true, cell: (p) => p.perMonth.toFixed(1) },
             ]}
           />
-        </div>
+        </ScrollRegion>
       </div>
       <details className="mt-3">
         <summary className="cursor-pointer text-sm font-medium text-copper-dark">Month by month for the charted parts</summary>

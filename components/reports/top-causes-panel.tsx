@@ -20,7 +20,7 @@ export async function TopCausesPanel({ today = new Date() }: { today?: Date }) {
             <li key={r.key} className="flex flex-col gap-0.5">
               <div className="flex items-baseline justify-between gap-3 text-sm">
                 <span>{r.name}</span>
-                <span className="font-mono tabular-nums text-ink-soft">{r.n} · {pct(r.share, 0)}</span>
+                <span className="whitespace-nowrap font-mono tabular-nums text-ink-soft">{r.n} · {pct(r.share, 0)}</span>
               </div>
               <span className="h-1.5 rounded bg-paper-deep" aria-hidden="true">
                 <span className="block h-1.5 rounded bg-copper" style={{ width: `${Math.max(2, Math.round((r.share / top[0].share) * 100))}%` }} />

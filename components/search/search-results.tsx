@@ -4,23 +4,37 @@ import { snippetAround } from "@/lib/search/highlight";
 import type { WriteupHit } from "@/lib/search/writeup-index";
 import { Highlighted } from "./highlighted";
 
-export const resultId = (id: number) => `writeup-result-${id}`;
+export const RESULTS_ID = "writeup-results";
 
-export function SearchResults({ hits, active, onHover }: { hits: WriteupHit[]; active: number; onHover: (i: number) => void }) {
+/** Focuses the first result's link (from the search box's ↓ key). */
+export function focusFirstResult(): boolean {
+  const first = document.querySelector<HTMLAnchorElement>(`#${RESULTS_ID} a`);
+  first?.focus();
+  return !!first;
+}
+
+// ↑ and ↓ move between the result links; ↑ on the first goes back to the search box.
+function moveFocus(e: React.KeyboardEvent<HTMLUListElement>, backTo: () => void) {
+  if (e.key !== "ArrowDown" && e.key !== "ArrowUp") return;
+  const links = Array.from(e.currentTarget.querySelectorAll<HTMLAnchorElement>("a"));
+  const at = links.indexOf(document.activeElement as HTMLAnchorElement);
+  if (at < 0) return;
+  e.preventDefault();
+  const next = e.key === "ArrowDown" ? Math.min(at + 1, links.length - 1) : at - 1;
+  if (next < 0) backTo(); else links[next].focus();
+}
+
+export function SearchResults({ hits, onLeaveTop }: { hits: WriteupHit[]; onLeaveTop: () => void }) {
   return (
-    <ul id="writeup-results" role="listbox" aria-label="Matching write-ups" className="flex flex-col gap-2" data-testid="search-results">
-      {hits.map((hit, i) => {
+    <ul id={RESULTS_ID} aria-label="Matching write-ups" className="flex flex-col gap-2" data-testid="search-results" onKeyDown={(e) => moveFocus(e, onLeaveTop)}>
+      {hits.map((hit) => {
         const snippet = hit.fields.includes("body") ? snippetAround(hit.doc.text, hit.terms) : null;
         return (
           <li
             key={hit.doc.id}
-            id={resultId(hit.doc.id)}
-            role="option"
-            aria-selected={i === active}
-            onMouseEnter={() => onHover(i)}
-            className={`rounded-lg border bg-white p-3 shadow-sm ${i === active ? "border-copper ring-2 ring-copper/30" : "border-ink-faint/30"}`}
+            className="rounded-lg border border-ink-faint/30 bg-white p-3 shadow-sm focus-within:border-copper focus-within:ring-2 focus-within:ring-copper/30"
           >
-            <Link href={`/writeups/${hit.doc.id}`} className="text-base font-semibold text-ink no-underline hover:text-copper-dark" tabIndex={-1}>
+            <Link href={`/writeups/${hit.doc.id}`} className="text-base font-semibold text-ink no-underline hover:text-copper-dark hover:underline">
               <Highlighted text={hit.doc.title} terms={hit.terms} />
             </Link>
             <p className="mt-0.5 text-sm text-ink-soft"><Highlighted text={hit.doc.summary} terms={hit.terms} /></p>

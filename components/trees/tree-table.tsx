@@ -2,6 +2,7 @@ import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import type { TreeListRow } from "@/lib/trees/queries";
 import { ProblemCount, StatusBadge, VersionBadge } from "./status-badge";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 import { formatDay } from "@/lib/format";
 
 
@@ -10,7 +11,7 @@ export function TreeTable({ rows, filtered }: { rows: TreeListRow[]; filtered: b
     return <EmptyState title={filtered ? "No tree matches these filters." : "No trees yet."}>{filtered ? "Clear the search or pick another status." : "Start one from nothing or import a tree file."}</EmptyState>;
   }
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Trees" className="overflow-x-auto">
       <table className="w-full text-left text-sm" data-testid="tree-table">
         <thead className="border-b border-ink-faint/40 text-xs uppercase tracking-wide text-ink-faint">
           <tr>
@@ -38,6 +39,6 @@ export function TreeTable({ rows, filtered }: { rows: TreeListRow[]; filtered: b
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -17,7 +17,7 @@ export function CauseRanking({ ranking, nameOf, explainAnswer }: {
           <li key={c.causeId} data-testid="ranked-cause" data-cause={c.causeId}>
             <div className="flex items-baseline justify-between gap-2 text-sm">
               <span className={i === 0 ? "font-semibold" : ""}>{nameOf(c.causeId)}</span>
-              <span className="font-mono tabular-nums">{percent(c.probability)}</span>
+              <span className="whitespace-nowrap font-mono tabular-nums">{percent(c.probability)}</span>
             </div>
             <div className="mt-1 h-2.5 rounded-full bg-paper-deep" aria-hidden="true">
               <div className="h-2.5 rounded-full bg-copper" style={{ width: `${(c.probability / top) * 100}%` }} />
@@ -27,7 +27,7 @@ export function CauseRanking({ ranking, nameOf, explainAnswer }: {
         <li data-testid="unlisted-share">
           <div className="flex items-baseline justify-between gap-2 text-sm text-ink-soft">
             <span>None of the listed causes</span>
-            <span className="font-mono tabular-nums">{percent(ranking.unlisted)}</span>
+            <span className="whitespace-nowrap font-mono tabular-nums">{percent(ranking.unlisted)}</span>
           </div>
           <div className="mt-1 h-2.5 rounded-full bg-paper-deep" aria-hidden="true">
             <div className="h-2.5 rounded-full bg-ink-faint" style={{ width: `${(ranking.unlisted / top) * 100}%` }} />

@@ -109,7 +109,7 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
   });
 
   return (
-    <div className="flex flex-col gap-5" data-testid="walk-screen" data-pending={pending ? "yes" : "no"}>
+    <div className="touch-targets flex flex-col gap-5" data-testid="walk-screen" data-pending={pending ? "yes" : "no"}>
       <WalkHeader kase={kase} />
       <StopRidingBanner advice={advice} />
       {error ? <p role="alert" data-testid="walk-error" className="rounded-md bg-danger-light p-3 text-danger">{error}</p> : null}

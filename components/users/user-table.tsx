@@ -2,6 +2,7 @@ import { may, ROLE_LABELS } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
 import type { AccountState, UserRow } from "@/lib/users/queries";
 import { UserRowControls } from "./user-row-controls";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const STATE_LABELS: Record<AccountState, string> = {
   active: "active",
@@ -12,25 +13,27 @@ const STATE_LABELS: Record<AccountState, string> = {
 
 export function UserTable({ rows, me }: { rows: UserRow[]; me: SessionUser }) {
   return (
-    <table className="w-full text-left text-sm">
-      <thead className="text-xs uppercase text-ink-faint">
-        <tr><th className="py-2">Name</th><th>E-mail</th><th>Role</th><th>Status</th><th className="w-2/5">Change</th></tr>
-      </thead>
-      <tbody className="divide-y divide-ink-faint/20">
-        {rows.map((row) => (
-          <tr key={row.id} className={row.active ? "" : "text-ink-faint"} data-testid={`user-${row.email}`}>
-            <td className="py-2 font-medium">{row.name}</td>
-            <td>{row.email}</td>
-            <td>{ROLE_LABELS[row.role]}</td>
-            <td>{STATE_LABELS[row.state]}</td>
-            <td>
-              {row.id === me.id ? <span className="text-ink-faint">your account</span> :
-                (row.role === "admin" && me.role !== "admin") ? <span className="text-ink-faint">administrator</span> :
-                <UserRowControls row={row} canGrantAdmin={me.role === "admin"} canForceReset={may(me.role, "users:force-reset")} />}
-            </td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
+    <ScrollRegion label="People" className="overflow-x-auto">
+      <table className="w-full text-left text-sm">
+        <thead className="text-xs uppercase text-ink-faint">
+          <tr><th className="py-2">Name</th><th>E-mail</th><th>Role</th><th>Status</th><th className="w-2/5">Change</th></tr>
+        </thead>
+        <tbody className="divide-y divide-ink-faint/20">
+          {rows.map((row) => (
+            <tr key={row.id} className={row.active ? "" : "text-ink-faint"} data-testid={`user-${row.email}`}>
+              <td className="py-2 font-medium">{row.name}</td>
+              <td>{row.email}</td>
+              <td>{ROLE_LABELS[row.role]}</td>
+              <td>{STATE_LABELS[row.state]}</td>
+              <td>
+                {row.id === me.id ? <span className="text-ink-faint">your account</span> :
+                  (row.role === "admin" && me.role !== "admin") ? <span className="text-ink-faint">administrator</span> :
+                  <UserRowControls row={row} canGrantAdmin={me.role === "admin"} canForceReset={may(me.role, "users:force-reset")} />}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </ScrollRegion>
   );
 }

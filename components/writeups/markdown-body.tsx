@@ -7,7 +7,7 @@ const BODY_STYLES = [
   "[&_p]:my-3 [&_ul]:my-3 [&_ul]:list-disc [&_ul]:pl-6 [&_ol]:my-3 [&_ol]:list-decimal [&_ol]:pl-6 [&_li]:my-1 [&_.task-list-item]:list-none",
   "[&_blockquote]:my-4 [&_blockquote]:border-l-4 [&_blockquote]:border-copper-light [&_blockquote]:pl-4 [&_blockquote]:text-ink-soft",
   "[&_table]:my-4 [&_table]:w-full [&_table]:border-collapse [&_table]:text-sm [&_th]:border-b-2 [&_th]:border-ink-faint/40 [&_th]:px-2 [&_th]:py-1 [&_th]:text-left [&_td]:border-b [&_td]:border-ink-faint/20 [&_td]:px-2 [&_td]:py-1",
-  "[&_pre]:my-4 [&_pre]:overflow-x-auto [&_pre]:rounded-md [&_pre]:bg-ink [&_pre]:p-3 [&_pre]:text-paper [&_code]:font-mono [&_code]:text-sm [&_:not(pre)>code]:rounded [&_:not(pre)>code]:bg-paper-deep [&_:not(pre)>code]:px-1",
+  "[&_pre]:my-4 [&_pre]:whitespace-pre-wrap [&_pre]:break-words [&_pre]:rounded-md [&_pre]:bg-ink [&_pre]:p-3 [&_pre]:text-paper [&_code]:font-mono [&_code]:text-sm [&_:not(pre)>code]:rounded [&_:not(pre)>code]:bg-paper-deep [&_:not(pre)>code]:px-1",
   "[&_img]:my-4 [&_img]:h-auto [&_img]:max-w-full [&_img]:rounded-md [&_img]:border [&_img]:border-ink-faint/30 [&_hr]:my-6 [&_hr]:border-ink-faint/30",
 ].join(" ");
 

@@ -2,7 +2,7 @@ import "server-only";
 import { DrizzlePostgreSQLAdapter } from "@lucia-auth/adapter-drizzle";
 import { Lucia, TimeSpan } from "lucia";
 import { db } from "@/db";
-import { sessions, users, type Role } from "@/db/schema";
+import { sessions, users, type Role, type Theme } from "@/db/schema";
 
 const adapter = new DrizzlePostgreSQLAdapter(db, sessions, users);
 
@@ -25,13 +25,14 @@ export const lucia = new Lucia(adapter, {
     name: attributes.name,
     role: attributes.role,
     active: attributes.active,
+    theme: attributes.theme,
   }),
 });
 
 declare module "lucia" {
   interface Register {
     Lucia: typeof lucia;
-    DatabaseUserAttributes: { email: string; name: string; role: Role; active: boolean };
+    DatabaseUserAttributes: { email: string; name: string; role: Role; active: boolean; theme: Theme };
     DatabaseSessionAttributes: { createdAt: Date };
   }
 }

@@ -6,6 +6,7 @@ import type { Db, Tx } from "@/db";
 import { sessions } from "@/db/schema";
 import { hashToken, newSessionToken } from "./token";
 import { lucia, SESSION_ABSOLUTE_LIFETIME, SESSION_COOKIE } from "./lucia";
+import type { Theme } from "@/db/schema";
 import type { SessionUser } from "./session-user";
 
 export type { SessionUser };
@@ -14,6 +15,8 @@ export interface ValidatedSession {
   user: SessionUser;
   sessionId: string;
   fresh: boolean;
+  /** The screen theme the person chose (kept with the account, read with the session). */
+  theme: Theme;
 }
 
 /** True when a session signed in at `createdAt` is past the absolute lifetime. */
@@ -37,6 +40,7 @@ export async function validateToken(token: string | undefined | null): Promise<V
     user: { id: user.id, email: user.email, name: user.name, role: user.role },
     sessionId: session.id,
     fresh: session.fresh,
+    theme: user.theme,
   };
 }
 

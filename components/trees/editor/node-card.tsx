@@ -46,7 +46,7 @@ function NodeCardInner({ data, selected }: NodeProps<TreeFlowNode>) {
           <span className="rounded bg-danger px-1.5 text-[10px] normal-case text-white" data-testid="node-problem-badge">
             {problems.length} problem{problems.length === 1 ? "" : "s"}
           </span>
-        ) : node.needsOpening ? <span className="rounded bg-white/25 px-1 text-[10px] normal-case">caution</span> : null}
+        ) : node.needsOpening ? <span className="rounded bg-white px-1 text-[10px] normal-case text-copper-dark">caution</span> : null}
       </div>
       <div className="px-2 py-1">
         <p className="truncate text-sm font-semibold text-ink">{node.title || "(untitled)"}</p>

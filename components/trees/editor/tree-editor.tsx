@@ -294,9 +294,9 @@ function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: Tre
               maxZoom={2}
               defaultEdgeOptions={{ type: "default" }}
             >
-              <Background gap={24} color="#d7d2c6" />
+              <Background gap={24} color="var(--color-paper-deep)" />
               <Controls showInteractive={false} position="bottom-left" />
-              <MiniMap pannable zoomable position="bottom-right" nodeColor={(n) => (n.data as TreeFlowNode["data"]).problems.length ? "#b3261e" : "#8a93a0"} />
+              <MiniMap pannable zoomable position="bottom-right" nodeColor={(n) => (n.data as TreeFlowNode["data"]).problems.length ? "var(--color-danger)" : "var(--color-ink-faint)"} />
             </ReactFlow>
             <div className="pointer-events-none absolute left-2 top-2 z-10">
               <div className="pointer-events-auto">

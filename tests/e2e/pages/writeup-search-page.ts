@@ -15,7 +15,7 @@ export class WriteupSearchPage {
   }
 
   input() {
-    return this.page.getByRole("combobox", { name: "Search write-ups" });
+    return this.page.getByRole("main").getByRole("searchbox", { name: "Search write-ups" });
   }
 
   status() {
@@ -23,7 +23,7 @@ export class WriteupSearchPage {
   }
 
   results() {
-    return this.page.getByTestId("search-results").getByRole("option");
+    return this.page.getByTestId("search-results").getByRole("listitem");
   }
 
   async type(text: string): Promise<void> {

@@ -50,6 +50,9 @@ export default async function CasePage({ params, searchParams }: { params: Promi
           <h1 className="flex items-center gap-3">{kase.symptom} <StatusBadge status={kase.status} /></h1>
           <p className="text-ink-soft">{kase.treeTitle} · tree version {kase.treeVersionNumber}</p>
         </div>
+        {kase.status === "booked_in" || kase.status === "on_bench" ? (
+          <Link href={`/cases/${kase.id}/job-card`} className="rounded-md border border-copper px-4 py-2 font-medium no-underline hover:bg-copper-light hover:no-underline" data-testid="job-card-link">Print the job card</Link>
+        ) : null}
         {kase.status === "open" && may(user.role, "case:work") ? (
           <Link href={`/triage/${kase.id}`} className="rounded-md bg-copper px-4 py-2 font-medium text-white no-underline hover:bg-copper-dark hover:no-underline">Continue the walk</Link>
         ) : null}

@@ -9,7 +9,7 @@ export default async function NewCallPage() {
   await requireRole("case:work", "/triage/new");
   const [families, trees] = await Promise.all([familyChoices(), treeChoices()]);
   return (
-    <div className="flex flex-col gap-6">
+    <div className="touch-targets flex flex-col gap-6">
       <div>
         <h1>New call</h1>
         <p className="text-ink-soft">Who is calling, about which unit, and what they notice. The symptom picks the tree you walk with them.</p>

@@ -6,6 +6,7 @@ import { changeRoleAction, forceResetAction, setActiveAction } from "@/lib/users
 import { inviteUserAction } from "@/lib/users/invite";
 import { changePasswordAction, requestResetAction, setPasswordFromLinkAction, signOutEverywhereAction } from "@/lib/users/password";
 import { setupAction } from "@/lib/users/setup";
+import { setThemeAction } from "@/lib/users/theme";
 import { TEST_PASSWORD } from "../../../support/db";
 import type { EntryPointRows } from "../entry-points";
 
@@ -60,6 +61,10 @@ export const rows: EntryPointRows = {
   {
     file: "app/(shop)/users/actions.ts", exportName: "forceReset", spec: forceResetAction as AnySpec, allowed: ["admin"],
     sample: ({ target }) => ({ userId: target.id }),
+  },
+  {
+    file: "app/(shop)/actions.ts", exportName: "setTheme", spec: setThemeAction as AnySpec, allowed: ALL,
+    sample: () => ({ theme: "dark" }),
   },
 ],
   routes: [
