@@ -44,6 +44,8 @@ function before(a: Block, b: Block): boolean {
   const lhs = a.p * b.c;
   const rhs = b.p * a.c;
   if (lhs !== rhs) return lhs > rhs;
+  // Equal efficiency (two free inspections, say): the likelier first, which is never worse.
+  if (a.p !== b.p) return a.p > b.p;
   if (a.c !== b.c) return a.c < b.c;
   return (a.causes[0] ?? "") < (b.causes[0] ?? "");
 }
@@ -65,13 +67,15 @@ function mergeChains(chains: Block[][]): Block[] {
 
 /**
  * The opening of an assembly must come before everything inside it. It starts a block that
- * absorbs the following blocks while they are more efficient than the block so far: the result
+ * absorbs the following blocks while they are at least as efficient as the block so far: the result
  * is the opening plus the most efficient prefix, followed by the rest unchanged.
  */
 function prependOpening(openMinutes: number, chain: Block[]): Block[] {
   const head: Block = { p: 0, c: openMinutes, causes: [] };
   let i = 0;
-  while (i < chain.length && ((head.c === 0 && head.p === 0) || chain[i].p * head.c > head.p * chain[i].c)) {
+  // A block as efficient as the head so far (a free inspection with no chance, say) is taken in
+  // too: it leaves the head's efficiency as it is and must not stop the blocks behind it.
+  while (i < chain.length && chain[i].p * head.c >= head.p * chain[i].c) {
     head.p += chain[i].p;
     head.c += chain[i].c;
     head.causes.push(...chain[i].causes);
@@ -153,7 +157,9 @@ export function teardownPlan(assemblies: Assembly[], inspections: BenchInspectio
 
   const chainOf = (id: string): Block[] => {
     const parts = [...own.get(id)!.map((b) => [b]), ...children.get(id)!.map(chainOf)];
-    return prependOpening(byId.get(id)!.openMinutes, mergeChains(parts));
+    const merged = mergeChains(parts);
+    // An assembly with nothing to inspect inside it is never opened.
+    return merged.length === 0 ? [] : prependOpening(byId.get(id)!.openMinutes, merged);
   };
   return stepsFor(chainOf(root).flatMap((b) => b.causes), byId, inspections);
 }

@@ -149,6 +149,26 @@ describe("teardown plan", () => {
     );
   });
 
+  it("is not held up by an empty assembly or a free inspection with no chance (a case brute force found)", () => {
+    const assemblies: Assembly[] = [
+      { id: "unit", parent: null, openMinutes: 0 },
+      { id: "a1", parent: "unit", openMinutes: 1 },
+      { id: "a4", parent: "a1", openMinutes: 0 }, // nothing to inspect inside
+    ];
+    const inspections: BenchInspection[] = [
+      { causeId: "c0", assemblyId: "unit", minutes: 1, probability: 1 / 300 },
+      { causeId: "c1", assemblyId: "a1", minutes: 0, probability: 2 / 300 },
+      { causeId: "c2", assemblyId: "unit", minutes: 0, probability: 0 },
+    ];
+    const plan = teardownPlan(assemblies, inspections);
+    const best = Math.min(...permutations(inspections).map((o) => costOf(o, assemblies)));
+    // Opening a1 (1 minute) finds c1 with 2/300, twice the efficiency of c0's 1/300 a minute:
+    // 1 + (1 − 2/300) · 1 = 1.99333…, where c0 first costs 1.99667.
+    expect(plan.expectedMinutes).toBeCloseTo(best, 12);
+    expect(plan.expectedMinutes).toBeCloseTo(1 + (1 - 2 / 300), 12);
+    expect(plan.order.indexOf("c1")).toBeLessThan(plan.order.indexOf("c0"));
+  });
+
   it("costs a given order with teardownPlanInOrder", () => {
     const assemblies: Assembly[] = [
       { id: "unit", parent: null, openMinutes: 0 },
