@@ -56,7 +56,7 @@ export function BenchScreen({ caseId, progress, stages, photos, canRecord, finis
   const stageName = new Map(stages.map((s) => [s.slug, s.name]));
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+    <div className="touch-targets grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
       <div className="flex min-w-0 flex-col gap-6">
         <Panel title="Checklist">
           <div className="flex flex-col gap-3">
