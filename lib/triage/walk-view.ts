@@ -1,27 +1,9 @@
-import type { NodeKind } from "@/db/schema";
+import type { GraphNode, GraphOption } from "@/lib/trees/graph-types";
 import type { ReachedCaution } from "./safety";
 
 /** The parts of a tree graph the triage screen needs (a GraphNode / GraphOption fits). */
-export interface ViewNode {
-  id: number;
-  key: string;
-  kind: NodeKind;
-  title: string;
-  prompt: string;
-  costMinutes: number;
-  needsOpening: boolean;
-  causeSlug: string | null;
-  cautionText: string;
-}
-
-export interface ViewOption {
-  id: number;
-  key: string;
-  fromKey: string;
-  toKey: string | null;
-  label: string;
-  dontKnow: boolean;
-}
+export type ViewNode = Omit<GraphNode, "posX" | "posY">;
+export type ViewOption = Pick<GraphOption, "id" | "key" | "fromKey" | "toKey" | "label" | "dontKnow">;
 
 /** Caution nodes the walk passed, each marked when it stands in front of a check that opens the unit. */
 export function reachedCautions(
