@@ -1,5 +1,6 @@
 import { STATUS_LABEL } from "@/components/cases/status-badge";
 import { TriageSummary } from "@/components/cases/triage-summary";
+import type { TeardownSummary } from "@/lib/bench/plan";
 import type { CaseHeader } from "@/lib/cases/queries";
 import { OPENING_CAUTION } from "@/lib/trees/caution";
 import { QrCode } from "./qr-code";
@@ -7,7 +8,13 @@ import { QrCode } from "./qr-code";
 const day = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "—");
 
 /** One printed page that travels with the unit in its box; the QR code opens the case. */
-export function JobCard({ kase, caseUrl, nameOf }: { kase: CaseHeader; caseUrl: string; nameOf: (slug: string) => string }) {
+export function JobCard({ kase, caseUrl, teardown, nameOf }: {
+  kase: CaseHeader;
+  /** The case's address from the app's configured public address, so the code opens the case from any device. */
+  caseUrl: string;
+  teardown: TeardownSummary | null;
+  nameOf: (slug: string) => string;
+}) {
   return (
     <article className="job-card flex flex-col gap-4 rounded-lg border border-ink-faint/30 bg-white p-6 text-ink" data-testid="job-card">
       <div className="flex items-start justify-between gap-6 border-b-2 border-ink pb-4">
@@ -42,7 +49,7 @@ export function JobCard({ kase, caseUrl, nameOf }: { kase: CaseHeader; caseUrl: 
 
       <section>
         <h2 className="text-base">At the end of the call</h2>
-        <TriageSummary kase={kase} nameOf={nameOf} />
+        <TriageSummary kase={kase} nameOf={nameOf} teardown={teardown} />
       </section>
 
       <section>
