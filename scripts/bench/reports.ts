@@ -73,7 +73,9 @@ async function generate(): Promise<{ added: number; ms: number }> {
       select m.new_id, s.confirmed_rank, s.confirmed_p, s.top_p, s.brier, s.log_loss
       from bench_map m join triage_scores s on s.case_id = m.old_id`;
   });
-  await pg`analyze`;
+  // What autovacuum does to a table soon after a bulk load (statistics, visibility map), done now so
+  // every run measures the same settled tables instead of racing the daemon.
+  await pg`vacuum (analyze) cases, case_steps, case_outcomes, outcome_causes, outcome_parts, outcome_upgrades, triage_scores`;
   return { added: need, ms: Date.now() - started };
 }
 
