@@ -73,10 +73,24 @@ async function generate(): Promise<{ added: number; ms: number }> {
       select m.new_id, s.confirmed_rank, s.confirmed_p, s.top_p, s.brier, s.log_loss
       from bench_map m join triage_scores s on s.case_id = m.old_id`;
   });
-  // What autovacuum does to a table soon after a bulk load (statistics, visibility map), done now so
-  // every run measures the same settled tables instead of racing the daemon.
-  await pg`vacuum (analyze) cases, case_steps, case_outcomes, outcome_causes, outcome_parts, outcome_upgrades, triage_scores`;
+  await settle();
   return { added: need, ms: Date.now() - started };
+}
+
+/**
+ * What autovacuum does to tables soon after a bulk load (statistics, visibility map), done before
+ * timing so every run measures the same settled tables instead of racing the daemon. A vacuum
+ * cannot mark pages all-visible while an older snapshot is open (autovacuum's own analyze may hold
+ * one for a moment), so it is repeated until the cases table is.
+ */
+async function settle(): Promise<void> {
+  for (let attempt = 0; attempt < 30; attempt++) {
+    await pg`vacuum (analyze) cases, case_steps, case_outcomes, outcome_causes, outcome_parts, outcome_upgrades, triage_scores`;
+    const [{ share }] = await pg<{ share: number }[]>`select relallvisible::float8 / greatest(relpages, 1) as share from pg_class where relname = 'cases'`;
+    if (share >= 0.95) return;
+    await new Promise((resolve) => setTimeout(resolve, 1000));
+  }
+  console.log("warning: the cases table is not settled (an old snapshot stays open); figures may be off");
 }
 
 interface Timing {
