@@ -35,6 +35,9 @@ function reportPages(): string[] {
 }
 
 async function loadTime(page: Page, url: string): Promise<number> {
+  // Each load starts from a blank page, after a pause, so the last page's teardown is not in it.
+  await page.goto("about:blank");
+  await page.waitForTimeout(100);
   const response = await page.goto(`${BASE}${url}`, { waitUntil: "load" });
   if (!response?.ok() || new URL(page.url()).pathname !== url.split("?")[0]) {
     throw new Error(`${url} answered ${response?.status()} at ${page.url()}; is the lead signed in?`);
