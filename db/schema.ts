@@ -351,6 +351,13 @@ export const cases = pgTable(
     benchPlan: jsonb("bench_plan").$type<{ order: string[]; expectedMinutes: number }>(),
     whatToSend: text("what_to_send").notNull().default(""),
     repeatOfCaseId: integer("repeat_of_case_id"),
+    /**
+     * Copies of this case's own bench outcome (outcome_causes), written with it by `storeConfirmedCauses`:
+     * the primary confirmed cause and every confirmed cause, so return-free follow-up reads a unit's
+     * visits from one index. No foreign key: outcome_causes holds that.
+     */
+    primaryCauseId: integer("primary_cause_id"),
+    confirmedCauseIds: integer("confirmed_cause_ids").array().notNull().default(sql`'{}'::integer[]`),
     createdAt: createdAt(),
     updatedAt: ts("updated_at").notNull().defaultNow(),
     triagedAt: ts("triaged_at"),
@@ -364,7 +371,9 @@ export const cases = pgTable(
     index("cases_serial_idx").on(t.serial),
     index("cases_version_idx").on(t.treeVersionId),
     // A unit's visits in order, with what return-free follow-up reads, so it never sorts the whole table.
-    index("cases_visits_idx").on(t.familyId, t.serial, t.createdAt, t.id, t.status, t.closedAt, t.ridingUse).where(sql`${t.serial} <> ''`),
+    index("cases_visits_idx")
+      .on(t.familyId, t.serial, t.createdAt, t.id, t.status, t.closedAt, t.ridingUse, t.primaryCauseId, t.confirmedCauseIds)
+      .where(sql`${t.serial} <> ''`),
     check("cases_status_check", sql`${t.status} in (${inList(CASE_STATUSES)})`),
     check("cases_caller_kind_check", sql`${t.callerKind} in (${inList(CALLER_KINDS)})`),
     check("cases_riding_use_check", sql`${t.ridingUse} in (${inList(RIDING_USES)})`),

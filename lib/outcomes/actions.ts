@@ -5,6 +5,7 @@ import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrad
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
+import { storeConfirmedCauses } from "./confirmed-causes";
 import { caseOnlyInput, outcomeFormInput, OTHER_PRIMARY, reopenInput } from "./input";
 import { refreshRepeatLink } from "./repeat";
 import { lockCase, moveStatus, outcomeLockedReason } from "./status";
@@ -51,6 +52,7 @@ export const saveOutcomeAction = defineAction({
           caseId: c.id, causeId, primary: input.primary !== OTHER_PRIMARY && input.primary === causeId,
         })));
       }
+      await storeConfirmedCauses(tx, [c.id]);
       await storeTriageScores(tx, [c.id]);
       await tx.delete(outcomeUpgrades).where(eq(outcomeUpgrades.caseId, c.id));
       if (input.upgradeKinds.length) await tx.insert(outcomeUpgrades).values(input.upgradeKinds.map((upgrade) => ({ caseId: c.id, upgrade })));

@@ -54,33 +54,28 @@ function guardOf(column: string) {
 export function followUpQuery(scope: FollowUpScope) {
   const use = scope.ridingUse === null ? pg`` : pg`and r.riding_use = ${scope.ridingUse}`;
   const visitFamily = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
+  // The case rows carry copies of their confirmed causes (primary_cause_id, confirmed_cause_ids), so
+  // the visits are read from cases_visits_idx alone; each cause's group still comes from the catalogue.
   return pg<FollowUpCount[]>`
-    with visits as (
-      select c.id, c.status, c.closed_at, c.riding_use,
-             lead(c.id) over w as next_id, lead(c.created_at) over w as next_at
+    with cause_groups as materialized (
+      select id, grp, array_agg(id) over (partition by grp) as group_ids
+      from (select id, ${groupOf("area")} as grp from causes) g
+    ),
+    visits as (
+      select c.id, c.status, c.closed_at, c.riding_use, c.primary_cause_id,
+             lead(c.created_at) over w as next_at, lead(c.confirmed_cause_ids) over w as next_causes
       from cases c
       where c.serial <> '' ${visitFamily}
       window w as (partition by c.family_id, c.serial order by c.created_at, c.id)
     ),
-    repairs as materialized (
-      select r.id, r.next_id, r.next_at > r.closed_at as came_back, ${groupOf("ca.area")} as grp,
-             floor(extract(epoch from case when r.next_id is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
-                                           else greatest(r.next_at - r.closed_at, interval '0') end) / 86400)::int as days
-      from visits r
-      join outcome_causes oc on oc.case_id = r.id and oc.is_primary
-      join causes ca on ca.id = oc.cause_id
+    ended as materialized (
+      select r.id, g.grp,
+             floor(extract(epoch from case when r.next_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
+                                           else greatest(r.next_at - r.closed_at, interval '0') end) / 86400)::int as days,
+             coalesce(r.next_at > r.closed_at and r.next_causes && g.group_ids, false) as event
+      from visits r join cause_groups g on g.id = r.primary_cause_id
       where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
         and r.closed_at < ${scope.to.toISOString()}::timestamptz ${use}
-    ),
-    -- The groups confirmed at each unit's next visit, for the repairs whose unit came back.
-    confirmed_next as (
-      select distinct x.case_id, ${groupOf("y.area")} as grp
-      from outcome_causes x join causes y on y.id = x.cause_id
-      where x.case_id in (select next_id from repairs where came_back)
-    ),
-    ended as (
-      select r.id, r.grp, r.days, cn.case_id is not null as event
-      from repairs r left join confirmed_next cn on cn.case_id = r.next_id and cn.grp = r.grp and r.came_back
     )
     select 'group' as kind, grp as key, days, event, count(*)::int as n from ended group by grp, days, event
     union all

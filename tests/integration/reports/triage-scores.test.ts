@@ -102,7 +102,7 @@ describe("triage scores stored with the bench outcome", () => {
     const after = await storedScores(caseIds);
     expect(after.size).toBe(caseIds.length);
     for (const [i, id] of caseIds.entries()) expectScoreOf(after.get(id), cases[i].ranking, cases[i].primary);
-    expect([...after.values()].map((r) => r.confirmedRank)).toEqual(caseIds.map((id) => before.get(id)!.confirmedRank));
+    expect(caseIds.map((id) => after.get(id)!.confirmedRank)).toEqual(caseIds.map((id) => before.get(id)!.confirmedRank));
   });
 
   describe("through the bench outcome form", () => {
