@@ -79,10 +79,12 @@ export function followUpQuery(scope: FollowUpScope) {
     )
     select 'group' as kind, grp as key, days, event, count(*)::int as n from ended group by grp, days, event
     union all
-    select 'fitted', u.upgrade, r.days, r.event, count(*)::int
+    -- The guard is tested inside the count, not in a join condition the planner cannot estimate (it
+    -- then expects a few rows and sorts tens of thousands on disk instead of hashing them).
+    select 'fitted', u.upgrade, r.days, r.event, count(*) filter (where ${guardOf("u.upgrade")} = r.grp)::int
     from ended r join outcome_upgrades u on u.case_id = r.id
-    where ${guardOf("u.upgrade")} = r.grp
-    group by u.upgrade, r.days, r.event`;
+    group by u.upgrade, r.days, r.event
+    having count(*) filter (where ${guardOf("u.upgrade")} = r.grp) > 0`;
 }
 
 export async function followUps(scope: FollowUpScope): Promise<FollowUpCount[]> {
