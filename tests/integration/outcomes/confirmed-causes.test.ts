@@ -1,11 +1,13 @@
 import { eq, sql } from "drizzle-orm";
+import { readFileSync, readdirSync } from "node:fs";
+import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "@/db";
+import { db, sql as pg } from "@/db";
 import { cases } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import { reopenCaseAction, saveOutcomeAction, startBenchAction } from "@/lib/outcomes/actions";
-import { createRoleUsers } from "../../support/db";
-import { resetToDemo } from "../../support/seed";
+import { seed } from "@/db/seed";
+import { createRoleUsers, truncateAll } from "../../support/db";
 import { demoIds, insertCases, type DemoIds } from "../reports/fixtures";
 
 /** The case rows that disagree with their own outcome_causes (the copy follow-up reads). */
@@ -23,7 +25,9 @@ describe("the case row's copy of its confirmed causes", () => {
   let caseId: number;
 
   beforeAll(async () => {
-    await resetToDemo();
+    // With the simulated history: its outcomes and the companion causes added to them are written by the seed.
+    await truncateAll();
+    await seed({ force: true });
     users = await createRoleUsers();
     ids = await demoIds();
     [caseId] = await insertCases(ids, [{ family: "orvanta-tessel-2", tree: "pedal-slip", serial: "CC-1", status: "booked_in" }]);
@@ -36,6 +40,8 @@ describe("the case row's copy of its confirmed causes", () => {
   const save = (extra: Record<string, unknown>) => executeAction(saveOutcomeAction, { caseId: String(caseId), labourMinutes: "30", ...extra }, users.tech);
 
   it("matches outcome_causes on every demo case (history and companion causes)", async () => {
+    const [{ n }] = await pg<{ n: number }[]>`select count(*)::int as n from cases where cardinality(confirmed_cause_ids) > 1`;
+    expect(n).toBeGreaterThan(0);
     expect(await disagreeing()).toEqual([]);
   });
 
@@ -61,6 +67,19 @@ describe("the case row's copy of its confirmed causes", () => {
     expect((await save({ causeId: "", otherCause: "" })).ok).toBe(true);
     expect(await stored()).toEqual({ primary: null, confirmed: [] });
     expect(await disagreeing()).toEqual([]);
+  });
+
+  it("the migration's backfill writes the same copy as the app", async () => {
+    const dir = path.join(process.cwd(), "db", "migrations");
+    const file = readdirSync(dir).find((f) => f.endsWith("_case_confirmed_causes.sql"))!;
+    const backfill = readFileSync(path.join(dir, file), "utf8").split("--> statement-breakpoint").find((s) => s.includes("UPDATE"))!;
+    const [{ n }] = await pg<{ n: number }[]>`select count(*)::int as n from cases where primary_cause_id is not null`;
+    expect(n).toBeGreaterThan(0);
+    await db.update(cases).set({ primaryCauseId: null, confirmedCauseIds: [] });
+    await pg.unsafe(backfill);
+    expect(await disagreeing()).toEqual([]);
+    const [again] = await pg<{ n: number }[]>`select count(*)::int as n from cases where primary_cause_id is not null`;
+    expect(again.n).toBe(n);
   });
 
   it("leaves the copy as it was when the save is refused", async () => {
