@@ -70,8 +70,10 @@ export function followUpQuery(scope: FollowUpScope) {
     ),
     ended as materialized (
       select r.id, g.grp,
-             floor(extract(epoch from case when r.next_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
-                                           else greatest(r.next_at - r.closed_at, interval '0') end) / 86400)::int as days,
+             -- A difference of two timestamptz is whole days plus under 24 hours, so its day field is the
+             -- whole days elapsed (and cheaper than dividing its epoch in numeric).
+             extract(day from case when r.next_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
+                                   else greatest(r.next_at - r.closed_at, interval '0') end)::int as days,
              coalesce(r.next_at > r.closed_at and r.next_causes && g.group_ids, false) as event
       from visits r join cause_groups g on g.id = r.primary_cause_id
       where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
