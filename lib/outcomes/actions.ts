@@ -4,6 +4,7 @@ import { db } from "@/db";
 import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrades, parts, uploads } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
+import { relearn } from "@/lib/review/learned";
 import { caseOnlyInput, outcomeFormInput, OTHER_PRIMARY, reopenInput } from "./input";
 import { refreshRepeatLink } from "./repeat";
 import { lockCase, moveStatus, outcomeLockedReason } from "./status";
@@ -16,7 +17,8 @@ export interface OutcomeSaved {
 
 /**
  * Saves the bench outcome of a case on the bench (confirmed causes with one primary, parts,
- * upgrades, labour, notes) and, with intent "close", closes the case in the same transaction.
+ * upgrades, labour, notes) and, with intent "close", closes the case in the same transaction,
+ * where its tree version's learned likelihoods are learned again with it.
  */
 export const saveOutcomeAction = defineAction({
   name: "outcomes.save",
@@ -61,7 +63,10 @@ export const saveOutcomeAction = defineAction({
       const repeatOfCaseId = await refreshRepeatLink(tx, c.id);
 
       const closing = input.intent === "close";
-      if (closing) await moveStatus(tx, c, "closed", user.id);
+      if (closing) {
+        await moveStatus(tx, c, "closed", user.id);
+        await relearn(tx, c.treeVersionId);
+      }
       return {
         ok: true as const,
         data: { caseId: c.id, closed: closing, repeatOfCaseId },
@@ -97,6 +102,7 @@ export const reopenCaseAction = defineAction({
       const c = await lockCase(tx, input.caseId);
       if (c.status !== "closed") throw new AppError("conflict", "Only a closed case can be reopened.");
       await moveStatus(tx, c, "on_bench", user.id, { kind: "reopened", note: input.reason });
+      await relearn(tx, c.treeVersionId);
       return { ok: true as const, data: { caseId: c.id }, message: `${c.reference} is open on the bench again.` };
     });
   },
