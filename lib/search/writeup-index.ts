@@ -28,6 +28,17 @@ export function fuzzyDistance(term: string): number {
   return term.length < 4 ? 0 : Math.min(2, Math.ceil(term.length * 0.2));
 }
 
+/**
+ * A query word this long or longer also matches the words it begins; a shorter one matches only
+ * itself. One or two letters begin thousands of the indexed words, and looking them all up took
+ * hundreds of milliseconds a keystroke at 10,000 write-ups, for results no one reads.
+ */
+export const MIN_PREFIX = 3;
+
+export function matchesAsPrefix(term: string): boolean {
+  return term.length >= MIN_PREFIX;
+}
+
 /** Fewer exact-or-prefix results than this, and the search tries near misses too. */
 export const FUZZY_BELOW = 10;
 
@@ -67,7 +78,7 @@ export const MINI_OPTIONS: Options<SearchDoc> & { fields: string[] } = {
   fields: [...FIELDS],
   storeFields: [],
   extractField: fieldText,
-  searchOptions: { boost: FIELD_BOOSTS, prefix: true, fuzzy: fuzzyDistance },
+  searchOptions: { boost: FIELD_BOOSTS, prefix: matchesAsPrefix, fuzzy: fuzzyDistance },
 };
 
 /**
@@ -104,8 +115,9 @@ export class WriteupIndex {
   }
 
   /**
-   * Results as you type. Every word must match (prefix or near miss); when that finds nothing,
-   * any word may. An empty query lists the filtered write-ups, newest first.
+   * Results as you type. Every word must match (itself, a word it begins from MIN_PREFIX letters
+   * on, or a near miss); when that finds nothing, any word may. An empty query lists the filtered
+   * write-ups, newest first.
    */
   search(query: string, filters: SearchFilters = {}, limit = 50): WriteupHit[] {
     if (!query.trim()) {
