@@ -38,8 +38,8 @@ export function ScorePreview({ dx, nodeKey, optionKey, nameOf }: {
               <span className="shrink-0 font-mono">{r.out ? "ruled out" : percentFine(r.p)} <span className="text-ink-faint">({percentFine(r.before)})</span></span>
             </div>
             <div className="relative mt-0.5 h-1.5 rounded bg-paper-deep">
-              <div className={`h-1.5 rounded ${r.id === "__unlisted" ? "bg-ink-faint" : "bg-copper"}`} style={{ width: percentFine(r.p) }} />
-              <div className="absolute top-[-2px] h-2.5 w-0.5 bg-ink" style={{ left: percentFine(r.before) }} aria-hidden="true" />
+              <div className={`h-1.5 rounded ${r.id === "__unlisted" ? "bg-ink-faint" : "bg-copper"}`} style={{ width: `${r.p * 100}%` }} data-testid="score-bar" />
+              <div className="absolute top-[-2px] h-2.5 w-0.5 bg-ink" style={{ left: `${r.before * 100}%` }} aria-hidden="true" />
             </div>
           </li>
         ))}

@@ -56,6 +56,9 @@ describe("a senior mechanic builds a tree from nothing", () => {
     await editor.setStrength(CAUSE_A, "strong");
     await editor.setStrength(CAUSE_B, "against");
     await editor.optionForm().getByTestId("score-preview").waitFor();
+    // The strong cause's bar is drawn to its share of the width (a "42 %" with a space is not CSS and drew nothing).
+    const barWidths = await editor.optionForm().getByTestId("score-bar").evaluateAll((bars) => bars.map((el) => el.getBoundingClientRect().width));
+    expect(Math.max(...barWidths)).toBeGreaterThan(10);
 
     // One answer only: the question needs two, and the second cause cannot be reached.
     await expect.poll(() => editor.problemCount()).toBe(2);
