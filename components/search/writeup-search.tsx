@@ -3,7 +3,7 @@ import { useRouter } from "next/navigation";
 import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { EmptyState } from "@/components/ui/empty-state";
 import type { SearchFilters } from "@/lib/search/types";
-import { MIN_PREFIX } from "@/lib/search/writeup-index";
+import { indexedTerm, MIN_PREFIX } from "@/lib/search/writeup-index";
 import { SearchFilterPanel } from "./search-filters";
 import { focusFirstResult, SearchResults } from "./search-results";
 import { useWriteupIndex } from "./use-writeup-index";
@@ -68,8 +68,8 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
         </p>
         {index && hits.length === 0 ? (
           <EmptyState title={deferredQuery.trim() ? `No write-up matches “${deferredQuery.trim()}”.` : "No published write-up matches these filters."}>
-            {deferredQuery.trim().split(/\s+/).some((word) => word.length > 0 && word.length < MIN_PREFIX)
-              ? "Words of one or two letters match only whole words: keep typing, or clear the filters."
+            {deferredQuery.trim().split(/\s+/).some((word) => word.length > 0 && (word.length < MIN_PREFIX || indexedTerm(word) === null))
+              ? "Words of one or two letters match only whole words, and common ones such as “to” or “the” none: keep typing, or clear the filters."
               : "Try fewer words, another spelling, or clear the filters."}
           </EmptyState>
         ) : (

@@ -39,6 +39,23 @@ export function matchesAsPrefix(term: string): boolean {
   return term.length >= MIN_PREFIX;
 }
 
+/**
+ * English words too common to tell one write-up from another: left out of the index and of
+ * queries. Typed on their way to a longer word ("to" in "torque"), each matched nearly every
+ * write-up. "s" and "t" are what is left of "maker's" and "don't" once the apostrophe splits them.
+ */
+const STOP_WORDS = new Set([
+  "a", "an", "and", "are", "as", "at", "be", "but", "by", "for", "from", "had", "has", "have", "if", "in", "into", "is", "it",
+  "its", "no", "not", "of", "on", "or", "s", "so", "t", "than", "that", "the", "then", "there", "this", "to", "was", "were",
+  "when", "with",
+]);
+
+/** A word as indexed and searched: lower case, or nothing for a stop word. */
+export function indexedTerm(term: string): string | null {
+  const lower = term.toLowerCase();
+  return STOP_WORDS.has(lower) ? null : lower;
+}
+
 /** Fewer exact-or-prefix results than this, and the search tries near misses too. */
 export const FUZZY_BELOW = 10;
 
@@ -78,6 +95,7 @@ export const MINI_OPTIONS: Options<SearchDoc> & { fields: string[] } = {
   fields: [...FIELDS],
   storeFields: [],
   extractField: fieldText,
+  processTerm: indexedTerm,
   searchOptions: { boost: FIELD_BOOSTS, prefix: matchesAsPrefix, fuzzy: fuzzyDistance },
 };
 

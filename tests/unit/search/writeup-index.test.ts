@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fuzzyDistance, matchesAsPrefix, serializeIndex, WriteupIndex } from "@/lib/search/writeup-index";
+import { fuzzyDistance, indexedTerm, matchesAsPrefix, serializeIndex, WriteupIndex } from "@/lib/search/writeup-index";
 import { comparable } from "../../support/search";
 import { doc, DOCS } from "./docs";
 
@@ -36,6 +36,15 @@ describe("write-up search", () => {
     expect(ids(short.search("oi"))).toEqual([]);
     expect(ids(short.search("oil"))).toEqual([21]);
     expect([matchesAsPrefix("be"), matchesAsPrefix("bea")]).toEqual([false, true]);
+  });
+
+  it("leaves common English words out of the index and of queries", () => {
+    const common = new WriteupIndex([doc(30, { title: "Water in the motor", text: "" }), doc(31, { title: "Tools to use", text: "" })]);
+    expect(common.search("the")).toEqual([]);
+    expect(common.search("to")).toEqual([]);
+    expect(ids(common.search("water the motor"))).toEqual([30]);
+    expect(ids(common.search("too"))).toEqual([31]);
+    expect([indexedTerm("The"), indexedTerm("Torque")]).toEqual([null, "torque"]);
   });
 
   it("ranks a title match above a body match", () => {
