@@ -92,7 +92,10 @@ export const startBenchAction = defineAction({
   },
 });
 
-/** closed → on_bench with a reason, recorded as a "reopened" case event; the outcome can be edited again. */
+/**
+ * closed → on_bench with a reason, recorded as a "reopened" case event; the outcome can be edited
+ * again, and its tree version's learned likelihoods are learned again without it.
+ */
 export const reopenCaseAction = defineAction({
   name: "outcomes.reopen",
   access: "case:reopen",
