@@ -8,11 +8,11 @@ import { Highlighted } from "./highlighted";
 export const RESULTS_ID = "writeup-results";
 
 /**
- * Cards painted at first; the rest of a search's results come with "Show more". Painting all fifty
+ * Cards painted at first, and added by each "Show more". Painting all fifty of a search's results
  * on every keystroke took most of the time from key to results at 10,000 write-ups, and a screen
  * shows fewer than ten.
  */
-export const FIRST_RESULTS = 20;
+export const FIRST_RESULTS = 10;
 
 /** Focuses the first result's link (from the search box's ↓ key). */
 export function focusFirstResult(): boolean {
