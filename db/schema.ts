@@ -3,6 +3,7 @@ import {
   type AnyPgColumn,
   boolean,
   check,
+  doublePrecision,
   index,
   integer,
   jsonb,
@@ -472,6 +473,21 @@ export const outcomeUpgrades = pgTable(
     check("outcome_upgrades_upgrade_check", sql`${t.upgrade} in (${inList(UPGRADE_KINDS)})`),
   ],
 );
+
+/**
+ * How the ranking at the end of triage scored against the bench outcome's primary cause, one row per
+ * case with both (rankingRowScore): written with the outcome in its transaction, so tree-accuracy
+ * reports add these up in SQL instead of decoding every stored ranking.
+ */
+export const triageScores = pgTable("triage_scores", {
+  caseId: integer("case_id").primaryKey().references(() => cases.id, { onDelete: "cascade" }),
+  /** 1-based rank of the confirmed cause in the final ranking; null when it was not predicted at all. */
+  confirmedRank: integer("confirmed_rank"),
+  confirmedP: doublePrecision("confirmed_p").notNull(),
+  topP: doublePrecision("top_p").notNull(),
+  brier: doublePrecision("brier").notNull(),
+  logLoss: doublePrecision("log_loss").notNull(),
+});
 
 /* ---------- knowledge ---------- */
 

@@ -2,17 +2,20 @@
 
 /* ---------- shares ---------- */
 
+/** The space between a number and its % sign: a no-break space, so a line never wraps between them. */
+const PERCENT = "\u00a0%";
+
 /** "42 %"; a share above zero but under half a percent reads "<1 %" rather than "0 %". */
-export const percent = (p: number) => (p > 0 && p < 0.005 ? "<1 %" : `${Math.round(p * 100)} %`);
+export const percent = (p: number) => (p > 0 && p < 0.005 ? `<1${PERCENT}` : `${Math.round(p * 100)}${PERCENT}`);
 
 /** "42.5 %" with a fixed number of decimals, for report tables. */
-export const pct = (x: number, digits = 1) => `${(x * 100).toFixed(digits)} %`;
+export const pct = (x: number, digits = 1) => `${(x * 100).toFixed(digits)}${PERCENT}`;
 
 /** Small shares keep one decimal ("4.2 %"), larger ones none ("42 %"). */
-export const percentFine = (p: number) => `${(p * 100).toFixed(p < 0.1 ? 1 : 0)} %`;
+export const percentFine = (p: number) => `${(p * 100).toFixed(p < 0.1 ? 1 : 0)}${PERCENT}`;
 
 /** A confidence interval, "12.3–18.9 %". */
-export const interval = (low: number, high: number) => `${(low * 100).toFixed(1)}–${(high * 100).toFixed(1)} %`;
+export const interval = (low: number, high: number) => `${(low * 100).toFixed(1)}–${(high * 100).toFixed(1)}${PERCENT}`;
 
 export const num = (x: number, digits = 3) => x.toFixed(digits);
 export const whole = new Intl.NumberFormat("en-GB");

@@ -47,7 +47,9 @@ fi
 if [ -f scripts/mail/worker.ts ]; then
   start_bg "$results/mail-worker.log" env DATABASE_URL="$E2E_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" MAIL_POLL_MS=300 npx tsx --conditions=react-server scripts/mail/worker.ts
 fi
-start_bg "$results/server.log" env NODE_ENV=production DATABASE_URL="$E2E_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" \
+# APP_URL names the server otherwise than the browser does, so a test can tell which one a link was built from.
+export E2E_APP_URL="http://localhost:$E2E_PORT"
+start_bg "$results/server.log" env NODE_ENV=production DATABASE_URL="$E2E_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" APP_URL="$E2E_APP_URL" \
   node node_modules/next/dist/bin/next start -p "$E2E_PORT" -H 127.0.0.1
 export E2E_PROCESS_PIDS="${STARTED_PIDS[*]}"
 wait_for_http "http://127.0.0.1:$E2E_PORT/api/health" 90 || { tail -n 40 "$results/server.log"; exit 1; }

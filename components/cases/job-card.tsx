@@ -1,24 +1,36 @@
+import { Fragment } from "react";
 import { STATUS_LABEL } from "@/components/cases/status-badge";
 import { TriageSummary } from "@/components/cases/triage-summary";
+import type { TeardownSummary } from "@/lib/bench/plan";
 import type { CaseHeader } from "@/lib/cases/queries";
 import { OPENING_CAUTION } from "@/lib/trees/caution";
 import { QrCode } from "./qr-code";
 
 const day = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "—");
 
+/** A long address may wrap after a slash, never inside the case number. */
+const breakAfterSlashes = (url: string) =>
+  url.split("/").map((part, i, parts) => <Fragment key={i}>{part}{i < parts.length - 1 ? <>/<wbr /></> : null}</Fragment>);
+
 /** One printed page that travels with the unit in its box; the QR code opens the case. */
-export function JobCard({ kase, caseUrl, nameOf }: { kase: CaseHeader; caseUrl: string; nameOf: (slug: string) => string }) {
+export function JobCard({ kase, caseUrl, teardown, nameOf }: {
+  kase: CaseHeader;
+  /** The case's address from the app's configured public address, so the code opens the case from any device. */
+  caseUrl: string;
+  teardown: TeardownSummary | null;
+  nameOf: (slug: string) => string;
+}) {
   return (
     <article className="job-card flex flex-col gap-4 rounded-lg border border-ink-faint/30 bg-white p-6 text-ink" data-testid="job-card">
-      <div className="flex items-start justify-between gap-6 border-b-2 border-ink pb-4">
-        <div>
+      <div className="flex flex-col gap-4 border-b-2 border-ink pb-4 sm:flex-row sm:items-start sm:justify-between sm:gap-6">
+        <div className="min-w-0">
           <p className="text-sm uppercase tracking-wide text-ink-soft">Rootbench job card · {STATUS_LABEL[kase.status]}</p>
-          <p className="font-mono text-5xl font-bold tracking-tight" data-testid="job-card-reference">{kase.reference}</p>
+          <p className="whitespace-nowrap font-mono text-4xl font-bold tracking-tight sm:text-5xl" data-testid="job-card-reference">{kase.reference}</p>
           <p className="mt-1 text-lg">{kase.familyLabel}{kase.serial ? ` · serial ${kase.serial}` : ""}</p>
         </div>
         <figure className="flex shrink-0 flex-col items-center gap-1">
           <QrCode text={caseUrl} label={`QR code that opens case ${kase.reference}`} />
-          <figcaption className="max-w-[48mm] break-all text-center font-mono text-[10px] text-ink-soft">{caseUrl}</figcaption>
+          <figcaption className="max-w-[48mm] text-center font-mono text-[10px] text-ink-soft">{breakAfterSlashes(caseUrl)}</figcaption>
         </figure>
       </div>
 
@@ -42,7 +54,7 @@ export function JobCard({ kase, caseUrl, nameOf }: { kase: CaseHeader; caseUrl: 
 
       <section>
         <h2 className="text-base">At the end of the call</h2>
-        <TriageSummary kase={kase} nameOf={nameOf} />
+        <TriageSummary kase={kase} nameOf={nameOf} teardown={teardown} />
       </section>
 
       <section>

@@ -51,10 +51,10 @@ export function CauseForm({ cause, parts }: { cause: CauseWithParts | null; part
         <legend className="text-sm font-medium text-ink-soft">Parts usually replaced</legend>
         {rows.length === 0 ? <p className="text-sm text-ink-faint">No parts listed.</p> : null}
         {rows.map((row, i) => (
-          <div key={i} className="flex items-center gap-2">
+          <div key={i} className="flex flex-wrap items-center gap-2">
             <label className="sr-only" htmlFor={`part-${i}`}>Part {i + 1}</label>
             <select id={`part-${i}`} name="partSlug" value={row.slug} onChange={(e) => setRows((r) => r.map((x, j) => (j === i ? { ...x, slug: e.target.value } : x)))}
-              className="flex-1 rounded-md border border-ink-faint/50 bg-white px-2 py-1.5 text-sm">
+              className="min-w-0 flex-1 rounded-md border border-ink-faint/50 bg-white px-2 py-1.5 text-sm">
               <option value="">— pick a part —</option>
               {parts.map((p) => <option key={p.slug} value={p.slug}>{p.name} ({p.sku}, {euros(p.unitPriceCents)})</option>)}
             </select>

@@ -15,7 +15,7 @@ export function PracticeCaseList({ rows }: { rows: PracticeCaseRow[] }) {
       <table className="w-full text-sm" data-testid="practice-cases">
         <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-soft">
           <tr>
-            <th className="px-3 py-2">The call</th>
+            <th className="min-w-48 px-3 py-2">The call</th>
             <th className="px-3 py-2">Motor family</th>
             <th className="px-3 py-2">Riding</th>
             <th className="px-3 py-2">Caller</th>

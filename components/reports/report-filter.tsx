@@ -29,7 +29,7 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
         })}
       </nav>
       <div className="flex flex-wrap items-end gap-x-6 gap-y-3">
-        <form method="get" action="/reports" aria-label="Motor family" className="flex items-end gap-2">
+        <form method="get" action="/reports" aria-label="Motor family" className="flex flex-wrap items-end gap-2">
           {filter.period.preset !== null ? <input type="hidden" name="last" value={filter.period.preset} /> : (
             <>
               <input type="hidden" name="from" value={filter.period.fromDay} />
@@ -45,7 +45,7 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
           </label>
           <button type="submit" className={button}>Show</button>
         </form>
-        <form method="get" action="/reports" aria-label="Custom period" className="flex items-end gap-2">
+        <form method="get" action="/reports" aria-label="Custom period" className="flex flex-wrap items-end gap-2">
           {filter.familySlug ? <input type="hidden" name="family" value={filter.familySlug} /> : null}
           <label className="flex flex-col gap-1 text-sm font-medium text-ink-soft">
             From

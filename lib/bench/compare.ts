@@ -10,16 +10,28 @@ export interface PlanMinutes {
   catalogue: number;
 }
 
+function planInput(stages: StageInfo[], causes: BenchCause[]): { assemblies: Assembly[]; inspections: BenchInspection[] } {
+  return {
+    assemblies: stages.map((s) => ({ id: s.slug, parent: s.parent, openMinutes: s.openMinutes })),
+    inspections: causes
+      .filter((c) => c.prior > 0)
+      .map((c) => ({ causeId: c.slug, assemblyId: c.stage, minutes: c.inspectMinutes, probability: c.prior })),
+  };
+}
+
+/** Expected minutes of the teardown plan alone (planMinutes' `teardown`), for reports over many units. */
+export function teardownMinutes(stages: StageInfo[], causes: BenchCause[]): number {
+  const { assemblies, inspections } = planInput(stages, causes);
+  return teardownPlan(assemblies, inspections).expectedMinutes;
+}
+
 /**
  * Both plans for one unit from the same probabilities: the flat order ranks by p over the
  * inspection's stand-alone minutes (its own minutes plus opening every stage around it), as the
  * phone's bench plan does; both orders are then costed with each stage opened once.
  */
 export function planMinutes(stages: StageInfo[], causes: BenchCause[]): PlanMinutes {
-  const assemblies: Assembly[] = stages.map((s) => ({ id: s.slug, parent: s.parent, openMinutes: s.openMinutes }));
-  const inspections: BenchInspection[] = causes
-    .filter((c) => c.prior > 0)
-    .map((c) => ({ causeId: c.slug, assemblyId: c.stage, minutes: c.inspectMinutes, probability: c.prior }));
+  const { assemblies, inspections } = planInput(stages, causes);
   const bySlug = new Map(stages.map((s) => [s.slug, s]));
   const standAlone = (stage: string) => {
     let minutes = 0;

@@ -1,7 +1,7 @@
 import "server-only";
 import { sql as pg } from "@/db";
 import { inScope, type ReportScope } from "@/lib/reports/scope";
-import { median, planMinutes } from "./compare";
+import { median, teardownMinutes } from "./compare";
 import { benchCauses, familyStages } from "./queries";
 
 export interface PlanVsActualRow {
@@ -29,14 +29,13 @@ export async function planVsActual(scope: ReportScope): Promise<PlanVsActualRow[
     where ${inScope(scope)} and c.final_ranking is not null and o.labour_minutes > 0`;
   const byFamily = new Map<number, Row[]>();
   for (const r of rows) byFamily.set(r.familyId, [...(byFamily.get(r.familyId) ?? []), r]);
-  const out: PlanVsActualRow[] = [];
-  for (const [familyId, cases] of byFamily) {
+  const out = await Promise.all([...byFamily].map(async ([familyId, cases]): Promise<PlanVsActualRow | null> => {
     const stages = await familyStages(familyId);
     const root = stages.find((s) => s.parent === null);
-    if (!root) continue;
+    if (!root) return null;
     const located = await benchCauses(familyId, null, root.slug);
-    const planned = cases.map((c) => planMinutes(stages, located.map((l) => ({ ...l, prior: c.ranking[l.slug] ?? 0 }))).teardown);
-    out.push({ familyId, family: cases[0].family, cases: cases.length, planned: median(planned), recorded: median(cases.map((c) => c.labour)) });
-  }
-  return out.sort((a, b) => a.family.localeCompare(b.family));
+    const planned = cases.map((c) => teardownMinutes(stages, located.map((l) => ({ ...l, prior: c.ranking[l.slug] ?? 0 }))));
+    return { familyId, family: cases[0].family, cases: cases.length, planned: median(planned), recorded: median(cases.map((c) => c.labour)) };
+  }));
+  return out.filter((r) => r !== null).sort((a, b) => a.family.localeCompare(b.family));
 }

@@ -21,6 +21,7 @@ export type {
   Interval,
   RankingRow,
   RankingScores,
+  RankingRowScore,
   CalibrationBin,
   PathWalk,
 } from "./types";
@@ -38,7 +39,7 @@ export { benchPlan } from "./bench-plan";
 export { validateTree } from "./validate";
 export { learnLikelihoods, DEFAULT_LEARNING_STRENGTH, MIN_COLUMN_CASES, REVIEW_BAYES_FACTOR } from "./learn";
 export { estimatePrecision, logMarginalLikelihood, logBayesFactorAgainstMean, posteriorMean, type CountColumn } from "./dirichlet";
-export { wilsonInterval, rankingScores, topKAccuracy, Z_95 } from "./statistics";
+export { wilsonInterval, rankingScores, rankingRowScore, calibrationBin, CALIBRATION_BINS, topKAccuracy, Z_95 } from "./statistics";
 export { walkPath } from "./path";
 export { kaplanMeier, logRank, type SurvivalObservation, type KaplanMeierStep } from "./survival";
 export { kaplanMeierOfTally, logRankOfTally, tallyObservations, type SurvivalTally } from "./survival";

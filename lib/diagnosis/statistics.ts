@@ -1,11 +1,11 @@
 import { DiagnosisError } from "./errors";
 import { requireNonNegative, requirePositive, requireProbability } from "./guards";
-import type { CalibrationBin, Interval, RankingRow, RankingScores } from "./types";
+import type { CalibrationBin, Interval, RankingRow, RankingRowScore, RankingScores } from "./types";
 
 /** Two-sided 95 % normal quantile, to the precision the interval needs. */
 export const Z_95 = 1.959963984540054;
 const LOG_LOSS_FLOOR = 1e-6;
-const CALIBRATION_BINS = 10;
+export const CALIBRATION_BINS = 10;
 
 /** Wilson score interval for x successes in n trials. */
 export function wilsonInterval(successes: number, n: number, z: number = Z_95): Interval {
@@ -51,6 +51,33 @@ export function topKAccuracy(rows: RankingRow[], k: number): number {
 }
 
 /**
+ * How one ranking scored against its confirmed category: the confirmed category's rank (Infinity
+ * when not predicted) and probability, the top probability (its calibration bin), the Brier sum and
+ * the log loss. rankingScores is the mean of these over rows; a report may store them per row.
+ */
+export function rankingRowScore(row: RankingRow): RankingRowScore {
+  checkRows([row]);
+  return scoreOf(row);
+}
+
+function scoreOf(row: RankingRow): RankingRowScore {
+  const confirmedP = Object.hasOwn(row.probabilities, row.confirmed) ? row.probabilities[row.confirmed] : 0;
+  let topP = 0;
+  let brier = Object.hasOwn(row.probabilities, row.confirmed) ? 0 : 1;
+  for (const [key, p] of Object.entries(row.probabilities)) {
+    brier += key === row.confirmed ? (p - 1) ** 2 : p * p;
+    if (p > topP) topP = p;
+  }
+  const logLoss = -Math.log(Math.min(1, Math.max(LOG_LOSS_FLOOR, confirmedP)));
+  return { rank: confirmedRank(row), confirmedP, topP, brier, logLoss };
+}
+
+/** The calibration bin (0 … CALIBRATION_BINS − 1) of a top probability. */
+export function calibrationBin(topP: number): number {
+  return Math.min(CALIBRATION_BINS - 1, Math.floor(topP * CALIBRATION_BINS));
+}
+
+/**
  * Top-1/top-3 hit rates, Brier's multi-category score (Σ over categories of (p − y)², the
  * confirmed one included at p = 0 when absent; range 0–2), log loss (natural log, p clipped
  * to [1e-6, 1]) and ten equal calibration bins of the top probability, all ten always present
@@ -65,24 +92,15 @@ export function rankingScores(rows: RankingRow[]): RankingScores {
   let logLoss = 0;
 
   for (const row of rows) {
-    const rank = confirmedRank(row);
-    if (rank === 1) top1++;
-    if (rank <= 3) top3++;
-
-    let topP = 0;
-    let squares = Object.hasOwn(row.probabilities, row.confirmed) ? 0 : 1;
-    for (const [key, p] of Object.entries(row.probabilities)) {
-      squares += key === row.confirmed ? (p - 1) ** 2 : p * p;
-      if (p > topP) topP = p;
-    }
-    brier += squares;
-    const pc = Object.hasOwn(row.probabilities, row.confirmed) ? row.probabilities[row.confirmed] : 0;
-    logLoss -= Math.log(Math.min(1, Math.max(LOG_LOSS_FLOOR, pc)));
-
-    const bin = bins[Math.min(CALIBRATION_BINS - 1, Math.floor(topP * CALIBRATION_BINS))];
+    const score = scoreOf(row);
+    if (score.rank === 1) top1++;
+    if (score.rank <= 3) top3++;
+    brier += score.brier;
+    logLoss += score.logLoss;
+    const bin = bins[calibrationBin(score.topP)];
     bin.n++;
-    bin.predicted += topP;
-    if (rank === 1) bin.hits++;
+    bin.predicted += score.topP;
+    if (score.rank === 1) bin.hits++;
   }
 
   const n = rows.length;

@@ -149,6 +149,17 @@ export interface RankingRow {
   confirmed: string;
 }
 
+export interface RankingRowScore {
+  /** 1-based rank of the confirmed category; Infinity when it was not predicted (absent or p = 0). */
+  rank: number;
+  confirmedP: number;
+  topP: number;
+  /** Σ over categories of (p − y)², the confirmed one included at p = 0 when absent. */
+  brier: number;
+  /** −ln p of the confirmed category, p clipped to [1e-6, 1]. */
+  logLoss: number;
+}
+
 export interface CalibrationBin {
   from: number;
   to: number;

@@ -10,9 +10,3 @@ export function isSameOrigin(headers: Headers): boolean {
   }
 }
 
-/** The address the browser used to reach us (behind a proxy, the forwarded host and scheme). */
-export function requestOrigin(headers: Headers): string {
-  const host = headers.get("x-forwarded-host") ?? headers.get("host") ?? "localhost";
-  const proto = headers.get("x-forwarded-proto")?.split(",")[0]?.trim() || "http";
-  return `${proto}://${host}`;
-}

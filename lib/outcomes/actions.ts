@@ -4,6 +4,7 @@ import { db } from "@/db";
 import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrades, parts, uploads } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
+import { storeTriageScores } from "@/lib/reports/triage-scores";
 import { relearn } from "@/lib/review/learned";
 import { caseOnlyInput, outcomeFormInput, OTHER_PRIMARY, reopenInput } from "./input";
 import { refreshRepeatLink } from "./repeat";
@@ -52,6 +53,7 @@ export const saveOutcomeAction = defineAction({
           caseId: c.id, causeId, primary: input.primary !== OTHER_PRIMARY && input.primary === causeId,
         })));
       }
+      await storeTriageScores(tx, [c.id]);
       await tx.delete(outcomeUpgrades).where(eq(outcomeUpgrades.caseId, c.id));
       if (input.upgradeKinds.length) await tx.insert(outcomeUpgrades).values(input.upgradeKinds.map((upgrade) => ({ caseId: c.id, upgrade })));
       await tx.delete(outcomeParts).where(eq(outcomeParts.caseId, c.id));

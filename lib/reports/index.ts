@@ -1,4 +1,5 @@
 import "server-only";
+import { planVsActual, type PlanVsActualRow } from "@/lib/bench/plan-vs-actual";
 import { treeAccuracy, type VersionAccuracy } from "./accuracy";
 import { causePareto, type Pareto } from "./pareto";
 import { partsDemand, type PartsDemand } from "./parts";
@@ -14,13 +15,14 @@ export interface ShopReport {
   parts: PartsDemand;
   repeats: RepeatRate;
   accuracy: VersionAccuracy[];
+  benchPlans: PlanVsActualRow[];
 }
 
-/** Everything /reports shows for one period and family; each part is its own GROUP BY query. */
+/** Everything /reports shows for one period and family, each part its own query, all at once. */
 export async function loadShopReport(filter: ReportFilter): Promise<ShopReport> {
   const scope = await resolveScope(filter);
-  const [pareto, trend, parts, repeats, accuracy] = await Promise.all([
-    causePareto(scope), causeTrend(scope), partsDemand(scope), repeatRate(scope), treeAccuracy(scope),
+  const [pareto, trend, parts, repeats, accuracy, benchPlans] = await Promise.all([
+    causePareto(scope), causeTrend(scope), partsDemand(scope), repeatRate(scope), treeAccuracy(scope), planVsActual(scope),
   ]);
-  return { scope, pareto, trend, parts, repeats, accuracy };
+  return { scope, pareto, trend, parts, repeats, accuracy, benchPlans };
 }

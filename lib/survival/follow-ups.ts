@@ -34,9 +34,9 @@ function groupOf(column: string) {
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
 }
 
-/** (upgrade, the cause group it guards) rows for a VALUES list; the slugs are our own fixed list. */
-function guards() {
-  return pg.unsafe(UPGRADES.map((u) => `('${u.slug}', '${u.guards}')`).join(", "));
+/** The cause group an upgrade guards, in SQL (the slugs are our own fixed list, so inlining them is safe). */
+function guardOf(column: string) {
+  return pg.unsafe(`(case ${column} ${UPGRADES.map((u) => `when '${u.slug}' then '${u.guards}'`).join(" ")} end)`);
 }
 
 /**
@@ -86,7 +86,7 @@ export function followUpQuery(scope: FollowUpScope) {
     union all
     select 'fitted', u.upgrade, r.days, r.event, count(*)::int
     from ended r join outcome_upgrades u on u.case_id = r.id
-    join (values ${guards()}) g(upgrade, grp) on g.upgrade = u.upgrade and g.grp = r.grp
+    where ${guardOf("u.upgrade")} = r.grp
     group by u.upgrade, r.days, r.event`;
 }
 

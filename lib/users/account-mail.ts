@@ -2,14 +2,7 @@ import "server-only";
 import type { Tx } from "@/db";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
-
-/**
- * The address links in e-mail point at: APP_URL, never the Host header of the request that caused
- * the mail (anyone can send a request with a Host of their choosing and so receive the link).
- */
-export function appUrl(env: NodeJS.ProcessEnv = process.env): string {
-  return (env.APP_URL ?? `http://localhost:${env.PORT ?? 3000}`).replace(/\/+$/, "");
-}
+import { appUrl } from "@/lib/http/app-url";
 
 export async function queueInvitation(tx: Tx, to: { email: string; name: string; role: Role }, invitedBy: string, token: string): Promise<void> {
   const link = `${appUrl()}/invite?token=${encodeURIComponent(token)}`;

@@ -9,7 +9,6 @@ import { ReportFilterBar } from "@/components/reports/report-filter";
 import { TrendSection } from "@/components/reports/trend-section";
 import { requireRole } from "@/lib/auth/require-role";
 import { may } from "@/lib/auth/roles";
-import { planVsActual } from "@/lib/bench/plan-vs-actual";
 import { loadShopReport } from "@/lib/reports";
 import { filterQuery, parseReportFilter } from "@/lib/reports/period";
 import { familyOptions } from "@/lib/reports/scope";
@@ -22,7 +21,6 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
   const user = await requireRole("reports:read", "/reports");
   const params = await searchParams;
   const [report, families] = await Promise.all([loadShopReport(parseReportFilter(params)), familyOptions()]);
-  const benchRows = await planVsActual(report.scope);
   const { filter } = report.scope;
   const query = filterQuery(filter);
   const version = Number(Array.isArray(params.version) ? params.version[0] : params.version);
@@ -53,7 +51,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
       <div className="grid gap-6">
         <PartsSection demand={report.parts} period={filter.period} />
         <RepeatSection repeats={report.repeats} />
-        <PlanVsActualSection rows={benchRows} />
+        <PlanVsActualSection rows={report.benchPlans} />
       </div>
     </div>
   );

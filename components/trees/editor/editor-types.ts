@@ -1,3 +1,4 @@
+import type { Theme } from "@/db/schema";
 import type { DraftGraph } from "@/lib/trees/draft";
 import type { CatalogueCause } from "./editor-context";
 
@@ -7,4 +8,6 @@ export interface TreeEditorProps {
   graph: DraftGraph;
   catalogue: CatalogueCause[];
   readOnly: boolean;
+  /** The person's theme: the canvas library's own parts (controls, minimap) follow it. */
+  theme: Theme;
 }

@@ -55,7 +55,7 @@ function failureText(result: ActionFailure): string {
 const isTyping = (target: EventTarget | null) =>
   target instanceof HTMLElement && (target.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(target.tagName));
 
-function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: TreeEditorProps) {
+function Editor({ tree, version, graph: initialGraph, catalogue, readOnly, theme }: TreeEditorProps) {
   const router = useRouter();
   const flow = useReactFlow<TreeFlowNode, TreeFlowEdge>();
   const wrapper = useRef<HTMLDivElement>(null);
@@ -293,6 +293,7 @@ function Editor({ tree, version, graph: initialGraph, catalogue, readOnly }: Tre
               minZoom={0.05}
               maxZoom={2}
               defaultEdgeOptions={{ type: "default" }}
+              colorMode={theme}
             >
               <Background gap={24} color="var(--color-paper-deep)" />
               <Controls showInteractive={false} position="bottom-left" />

@@ -1,6 +1,7 @@
 import { eq, sql } from "drizzle-orm";
 import type { Tx } from "@/db";
 import { caseEvents, caseOutcomes, cases, caseSteps, outcomeCauses, outcomeParts, outcomeUpgrades } from "@/db/schema";
+import { storeTriageScores } from "@/lib/reports/triage-scores";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import type { SimCase } from "./simulate";
 
@@ -69,6 +70,7 @@ export async function insertHistory(tx: Tx, sims: SimCase[], ids: HistoryIds): P
     if (partRows.length) await tx.insert(outcomeParts).values(partRows);
     const upgradeRows = batch.flatMap(({ s, id }) => s.outcome!.upgradeKinds.map((upgrade) => ({ caseId: id, upgrade })));
     if (upgradeRows.length) await tx.insert(outcomeUpgrades).values(upgradeRows);
+    await storeTriageScores(tx, batch.map(({ id }) => id));
   }
 
   const events = sims.flatMap((s, i) => {

@@ -37,7 +37,7 @@ describe.each(ALL_ROLES)("WCAG 2.1 AA sweep as %s", (role) => {
   });
   afterAll(async () => { await browser?.close(); });
 
-  it("every screen at 1360, 820 and 390 px: no axe-core violations, one header row, triage and bench controls 44 px or more", async () => {
+  it("every screen at 1360, 820 and 390 px: no axe-core violations, no page wider than the screen, one header row, triage and bench controls 44 px or more", async () => {
     const { page } = browser;
     const found: Record<string, string[]> = {};
     for (const screen of screens) {
@@ -52,6 +52,8 @@ describe.each(ALL_ROLES)("WCAG 2.1 AA sweep as %s", (role) => {
         const problems = await axeViolations(page);
         if (screen.touchArea) problems.push(...(await smallTargets(page, screen.touchArea)).map((t) => `target under 44 px: ${t}`));
         if (await headerOverflows(page)) problems.push("the header row overflows");
+        const overflow = await pageOverflow(page);
+        if (overflow) problems.push(`the page is wider than the screen (WCAG 1.4.10 Reflow): ${overflow}`);
         if (problems.length) found[`${screen.name} at ${width} px`] = problems;
         if (screen.photographed && role === PHOTOGRAPHED_ROLE && name !== "desktop") await screenshot(page, `a11y-${name}-${screen.name.replace(/ /g, "-")}`);
       }
@@ -71,3 +73,23 @@ function headerOverflows(page: Browser["page"]): Promise<boolean> {
   return page.locator("header > div").first().evaluate((row) => row.scrollWidth > row.clientWidth || row.getBoundingClientRect().height > 72);
 }
 
+
+/**
+ * The page reflows to the screen's width (WCAG 1.4.10): only a box that scrolls sideways itself (a
+ * wide table in its overflow-x-auto wrapper) may hold content wider than the screen. When the page
+ * is wider, names the outermost elements that stick out past its right edge, to say where to look.
+ */
+function pageOverflow(page: Browser["page"]): Promise<string | null> {
+  return page.evaluate(() => {
+    const width = window.innerWidth;
+    if (document.documentElement.scrollWidth <= width) return null;
+    const name = (el: Element) => `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ""}${el.getAttribute("data-testid") ? `[data-testid=${el.getAttribute("data-testid")}]` : ""}.${[...el.classList].slice(0, 4).join(".")}`;
+    const culprits: string[] = [];
+    const visit = (el: Element) => {
+      if (el.getBoundingClientRect().right > width + 0.5) { culprits.push(`${name(el)} (${Math.round(el.getBoundingClientRect().right)} px)`); return; }
+      for (const child of el.children) visit(child);
+    };
+    for (const child of document.body.children) visit(child);
+    return `${document.documentElement.scrollWidth} px wide; sticking out: ${culprits.slice(0, 4).join(", ") || "?"}`;
+  });
+}

@@ -5,9 +5,10 @@ import jsQR from "jsqr";
 import { PNG } from "pngjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sql } from "@/db";
+import { BenchPage } from "../pages/bench-page";
 import { JobCardPage } from "../pages/job-card-page";
 import { SignInPage } from "../pages/sign-in-page";
-import { BASE_URL, openBrowser, SCREENSHOTS, type Browser } from "../support/browser";
+import { APP_URL, BASE_URL, openBrowser, SCREENSHOTS, type Browser } from "../support/browser";
 
 // pdftoppm, pdfinfo and pdftotext are Debian's poppler-utils; npm test installs them when missing.
 const poppler = (tool: string, args: string[]) => execFileSync(tool, args, { encoding: "utf8" });
@@ -26,7 +27,7 @@ describe("the printed job card of a booked-in unit", () => {
   });
   afterAll(async () => { await browser?.close(); await sql.end({ timeout: 5 }); });
 
-  it("prints on one A4 page whose QR code decodes to the case's address", async () => {
+  it("prints on one A4 page whose QR code decodes to the case's address at the app's public address", async () => {
     const card = new JobCardPage(browser.page);
     await card.openFromCase(caseId);
     const reference = (await card.reference().innerText()).trim();
@@ -47,7 +48,21 @@ describe("the printed job card of a booked-in unit", () => {
     poppler("pdftoppm", ["-png", "-r", "150", "-singlefile", pdfFile, pngBase]);
     const png = PNG.sync.read(readFileSync(`${pngBase}.png`));
     const qr = jsQR(new Uint8ClampedArray(png.data.buffer, png.data.byteOffset, png.data.byteLength), png.width, png.height);
-    expect(qr?.data).toBe(`${BASE_URL}/cases/${caseId}`);
+    // APP_URL, not the address this browser happens to use (a QR code is scanned on another device).
+    expect(qr?.data).toBe(`${APP_URL}/cases/${caseId}`);
+    expect(APP_URL).not.toBe(BASE_URL);
+  });
+
+  it("prints the bench screen's plan, though the call stored none", async () => {
+    const [{ benchPlan }] = await sql<{ benchPlan: unknown }[]>`select bench_plan as "benchPlan" from cases where id = ${caseId}`;
+    expect(benchPlan).toBeNull();
+    const bench = new BenchPage(browser.page);
+    await bench.open(caseId);
+    const checklist = await bench.stepCauses();
+    expect(checklist.length).toBeGreaterThan(0);
+    const card = new JobCardPage(browser.page);
+    await card.openFromCase(caseId);
+    expect(await card.benchPlanCauses()).toEqual(checklist.slice(0, 5));
   });
 
   it("is refused to a trainee, who never sees real cases", async () => {

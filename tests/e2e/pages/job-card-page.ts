@@ -20,6 +20,11 @@ export class JobCardPage {
     return this.page.getByTestId("job-card-reference");
   }
 
+  /** The bench plan's causes in the order printed. */
+  benchPlanCauses(): Promise<string[]> {
+    return this.card().getByTestId("bench-plan").locator("li").evaluateAll((els) => els.map((e) => e.getAttribute("data-cause") ?? ""));
+  }
+
   /** What Chromium's "Save as PDF" would make of the page (print stylesheet, A4). */
   pdf(): Promise<Buffer> {
     return this.page.pdf({ format: "A4", printBackground: true, preferCSSPageSize: true });

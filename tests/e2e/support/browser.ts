@@ -4,6 +4,8 @@ import path from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
 
 export const BASE_URL = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3100";
+/** The server's APP_URL: the same server under another name than the browser's, so links built from it can be told apart. */
+export const APP_URL = process.env.E2E_APP_URL ?? BASE_URL.replace("127.0.0.1", "localhost");
 export const SCREENSHOTS = path.resolve(__dirname, "../screenshots");
 export const DEMO_PASSWORD = "bench-demo-2026";
 

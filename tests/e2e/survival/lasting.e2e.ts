@@ -82,7 +82,7 @@ describe("does the repair last?", () => {
     // Every claim carries its figures and its test.
     const supported = await page.getByTestId("advice-supported").allTextContents();
     expect(supported.length).toBeGreaterThan(0);
-    for (const line of supported) expect(line).toMatch(/less often: \d+ % with vs \d+ % without by \d+ months \(p (=|<) 0\.\d+; n = \d+ with, \d+ without\)/);
+    for (const line of supported) expect(line).toMatch(/less often: \d+\u00a0% with vs \d+\u00a0% without by \d+ months \(p (=|<) 0\.\d+; n = \d+ with, \d+ without\)/);
     await shot(page, "lasting-advice-at-booking");
   });
 });

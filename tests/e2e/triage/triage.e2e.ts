@@ -105,7 +105,7 @@ describe("phone triage, end to end", () => {
     const mail = await waitForMail(email);
     expect(mail.subject).toBe(`${reference}: your Orvanta Tessel Gen 2 drive unit is booked in`);
     expect(mail.text).toMatch(/PLEASE STOP RIDING/);
-    expect(mail.text).toMatch(/One-way clutch cage broken: about \d+ % likely/);
+    expect(mail.text).toMatch(/One-way clutch cage broken: about \d+\u00a0% likely/);
     expect(mail.text).toMatch(/ROUGH QUOTE\n- €\d+ to €\d+/);
     expect(mail.text).toMatch(/dangerous goods/);
     expect(mail.html).toMatch(/<h3>How to send the unit<\/h3>/);

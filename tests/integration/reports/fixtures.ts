@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions, type CaseStatus } from "@/db/schema";
+import { storeTriageScores } from "@/lib/reports/triage-scores";
 import { relearn } from "@/lib/review/learned";
 import { loadGraph } from "@/lib/trees/graph";
 
@@ -103,6 +104,7 @@ export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<numb
         ...(s.secondary ?? []).map((slug) => ({ caseId: id, causeId: ids.cause(slug), primary: false })),
       ]);
       if (causeRows.length) await db.insert(outcomeCauses).values(causeRows);
+      await db.transaction((tx) => storeTriageScores(tx, withOutcome.map(({ id }) => id)));
     }
     const partRows = group.flatMap((s, i) => (s.parts ?? []).map((p) => ({ caseId: caseIds[i], partId: ids.part(p.slug), quantity: p.quantity })));
     if (partRows.length) await db.insert(outcomeParts).values(partRows);

@@ -151,7 +151,7 @@ describe("upgrade advice where the record bears it", () => {
     const advice = await upgradeAdviceFor({ id: family, name: "Fennel Gen 1" }, "road", AS_OF);
     const byKind = (slug: string) => advice.items.find((a) => a.upgrade.slug === slug)!;
     expect(byKind("crank-seal-barrier")).toMatchObject({ kind: "supported" });
-    expect(byKind("crank-seal-barrier").callerText).toContain("3 % against 50 % within 3 months (30 and 30 repairs)");
+    expect(byKind("crank-seal-barrier").callerText).toContain("3\u00a0% against 50\u00a0% within 3 months (30 and 30 repairs)");
     expect(byKind("sealed-bearings").kind).toBe("too_few"); // never fitted: nothing to compare
     expect(byKind("sealed-screws").kind).toBe("too_few");
   });

@@ -51,8 +51,8 @@ describe("the review in plain words", () => {
   };
 
   it("says what the cases did against what the tree expects, and the change", () => {
-    expect(suggestionSentence(s)).toBe("30 closed cases of “Mounting bolts loose” answered “When does it click?”; “Over bumps” came 28 times (93 %) where the tree expects 10 %.");
-    expect(proposalSentence(s)).toBe("Change “Over bumps” from “against” to “strong” (the tree would then expect 75 %).");
+    expect(suggestionSentence(s)).toBe("30 closed cases of “Mounting bolts loose” answered “When does it click?”; “Over bumps” came 28 times (93\u00a0%) where the tree expects 10\u00a0%.");
+    expect(proposalSentence(s)).toBe("Change “Over bumps” from “against” to “strong” (the tree would then expect 75\u00a0%).");
     expect(strengthSentence(s)).toBe("Learned from this question's own history: the tree counts as 2.7 cases against the shop's 30.");
   });
 

@@ -12,7 +12,7 @@ describe("advise the caller to stop riding", () => {
     const at = rideAdvice(ranking({ clutch1: 0.25, gear1: 0.15, board1: 0.55 }), areaOf, []);
     expect(at.stopRiding).toBe(true);
     expect(at.driveShare).toBeCloseTo(0.4, 12);
-    expect(at.reasons).toEqual(["clutch and drive-train causes together at 40 % (the line is 40 %)"]);
+    expect(at.reasons).toEqual(["clutch and drive-train causes together at 40\u00a0% (the line is 40\u00a0%)"]);
     expect(rideAdvice(ranking({ clutch1: 0.25, gear1: 0.14, board1: 0.56 }), areaOf, []).stopRiding).toBe(false);
   });
 

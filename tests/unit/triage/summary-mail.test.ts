@@ -13,7 +13,7 @@ describe("the summary e-mail", () => {
   it("has the likely cause, the quote, how to send, the stop-riding and standing safety advice in text and HTML", () => {
     const m = composeSummaryMail(base);
     expect(m.subject).toBe("TW-2601-0001: your Family X drive unit is booked in");
-    for (const part of ["PLEASE STOP RIDING", "Cause A: about 62 % likely", "€165 to €270", "HOW TO SEND THE UNIT", "Do not open the drive unit yourself"]) {
+    for (const part of ["PLEASE STOP RIDING", "Cause A: about 62\u00a0% likely", "€165 to €270", "HOW TO SEND THE UNIT", "Do not open the drive unit yourself"]) {
       expect(m.text).toContain(part);
     }
     expect(m.html).toContain("<h3>Rough quote</h3>");

@@ -10,8 +10,7 @@ import { StepList } from "@/components/cases/step-list";
 import { TriageSummary } from "@/components/cases/triage-summary";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
-import { benchProgress } from "@/lib/bench/progress";
-import { loadBench } from "@/lib/bench/queries";
+import { teardownSummary } from "@/lib/bench/plan";
 import { may } from "@/lib/auth/roles";
 import { causesBySlug } from "@/lib/triage/catalogue";
 import { caseEventRows, caseHeader, caseStepRows } from "@/lib/cases/queries";
@@ -32,10 +31,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
   const catalogue = await causesBySlug(tree.graph.causes.map((c) => c.slug));
   const nameOf = (slug: string) => catalogue.get(slug)?.name ?? slug;
   const titleOf = (key: string) => tree.nodeByKey.get(key)?.title ?? key;
-  // A unit in the shop always gets a teardown plan, whatever the call ended with.
-  const inShop = kase.status === "booked_in" || kase.status === "on_bench";
-  const bench = inShop ? await loadBench(id) : null;
-  const teardown = bench ? { ...benchProgress(bench.inputs), href: `/cases/${id}/bench` } : null;
+  const teardown = await teardownSummary(kase);
 
   return (
     <div className="flex flex-col gap-6" data-testid="case-page">
@@ -73,7 +69,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
 
       <CaseFollowUp kase={kase} />
 
-      {kase.triagedAt ? <Panel title="Triage result"><TriageSummary kase={kase} nameOf={nameOf} teardown={teardown && { order: teardown.checklist.map((s) => s.cause), expectedMinutes: teardown.expectedMinutesLeft, href: teardown.href }} /></Panel> : null}
+      {kase.triagedAt ? <Panel title="Triage result"><TriageSummary kase={kase} nameOf={nameOf} teardown={teardown} /></Panel> : null}
 
       {/* Bench outcome: the outcome form (confirmed causes, parts, upgrades, photos) mounts in this slot. */}
       <OutcomeSection caseId={kase.id} user={user} />

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { headers } from "next/headers";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { JobCard } from "@/components/cases/job-card";
@@ -9,7 +8,8 @@ import { requireRole } from "@/lib/auth/require-role";
 import { causesBySlug } from "@/lib/triage/catalogue";
 import { caseHeader } from "@/lib/cases/queries";
 import { publishedTree } from "@/lib/triage/tree-cache";
-import { requestOrigin } from "@/lib/http/origin";
+import { appUrl } from "@/lib/http/app-url";
+import { teardownSummary } from "@/lib/bench/plan";
 
 export const metadata: Metadata = { title: "Job card" };
 
@@ -23,7 +23,7 @@ export default async function JobCardPage({ params }: { params: Promise<{ id: st
   if (!Number.isInteger(id) || id <= 0) notFound();
   const kase = await caseHeader(id);
   if (!kase) notFound();
-  const caseUrl = `${requestOrigin(await headers())}/cases/${kase.id}`;
+  const caseUrl = `${appUrl()}/cases/${kase.id}`;
 
   if (!PRINTABLE.has(kase.status) || !kase.triagedAt) {
     return (
@@ -32,7 +32,7 @@ export default async function JobCardPage({ params }: { params: Promise<{ id: st
       </EmptyState>
     );
   }
-  const tree = await publishedTree(kase.treeVersionId);
+  const [tree, teardown] = await Promise.all([publishedTree(kase.treeVersionId), teardownSummary(kase)]);
   const catalogue = await causesBySlug(tree.graph.causes.map((c) => c.slug));
   return (
     <div className="flex flex-col gap-4">
@@ -40,7 +40,7 @@ export default async function JobCardPage({ params }: { params: Promise<{ id: st
         <p className="text-sm"><Link href={`/cases/${kase.id}`}>← Back to case {kase.reference}</Link></p>
         <PrintButton>Print job card</PrintButton>
       </div>
-      <JobCard kase={kase} caseUrl={caseUrl} nameOf={(slug) => catalogue.get(slug)?.name ?? slug} />
+      <JobCard kase={kase} caseUrl={caseUrl} teardown={teardown} nameOf={(slug) => catalogue.get(slug)?.name ?? slug} />
     </div>
   );
 }

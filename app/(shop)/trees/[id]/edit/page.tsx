@@ -5,6 +5,7 @@ import { EditorLoader } from "@/components/trees/editor/editor-loader";
 import { DiscardDraftForm, StartDraftForm } from "@/components/trees/version-forms";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
+import { currentSession } from "@/lib/auth/session";
 import { causeOptions } from "@/lib/catalogue/queries";
 import { parseId } from "@/lib/trees/access";
 import { graphToDraft } from "@/lib/trees/draft";
@@ -22,7 +23,7 @@ export default async function EditTreePage({ params }: { params: Promise<{ id: s
   const draft = draftOf(detail);
   const published = latestPublishedOf(detail);
   const shown = draft ?? published;
-  const [graph, catalogue] = await Promise.all([shown ? loadGraph(shown.id) : null, causeOptions()]);
+  const [graph, catalogue, session] = await Promise.all([shown ? loadGraph(shown.id) : null, causeOptions(), currentSession()]);
 
   return (
     <div className="flex flex-col gap-3">
@@ -52,6 +53,7 @@ export default async function EditTreePage({ params }: { params: Promise<{ id: s
           graph={graphToDraft(graph)}
           catalogue={catalogue}
           readOnly={!draft}
+          theme={session?.theme ?? "light"}
         />
       ) : null}
     </div>
