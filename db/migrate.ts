@@ -17,7 +17,13 @@ export async function runMigrations(url = databaseUrl()): Promise<void> {
 if (require.main === module) {
   const started = Date.now();
   runMigrations()
-    .then(() => console.log(`migrations applied in ${Date.now() - started} ms`))
+    .then(async () => {
+      // Tables of learned likelihoods a database from before they were stored lacks (needs the engine, so not SQL).
+      const { relearnMissing } = await import("../lib/review/learned");
+      const { sql } = await import("./index");
+      const learned = await relearnMissing().finally(() => sql.end({ timeout: 5 }));
+      console.log(`migrations applied in ${Date.now() - started} ms${learned ? `; likelihoods learned for ${learned} tree version${learned === 1 ? "" : "s"}` : ""}`);
+    })
     .catch((error: unknown) => {
       console.error("migration failed:", error instanceof Error ? error.message : error);
       process.exit(1);

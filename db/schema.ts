@@ -251,6 +251,20 @@ export const treeVersions = pgTable(
 );
 export type TreeVersion = typeof treeVersions.$inferSelect;
 
+/**
+ * What triage scores a published version with when it uses learned likelihoods: the table learned
+ * from the version's closed cases with the shop's strength weights (option key → cause slug → p),
+ * and how many closed cases it was learned from. Re-learned in the transaction of every change to
+ * its inputs (a case on the version closed or reopened, the shop's diagnosis settings saved).
+ */
+export const learnedLikelihoods = pgTable("learned_likelihoods", {
+  versionId: integer("version_id").primaryKey().references(() => treeVersions.id, { onDelete: "cascade" }),
+  cases: integer("cases").notNull(),
+  likelihoods: jsonb("likelihoods").$type<Record<string, Record<string, number>>>().notNull(),
+  learnedAt: ts("learned_at").notNull().defaultNow(),
+});
+export type LearnedLikelihoodsRow = typeof learnedLikelihoods.$inferSelect;
+
 export const treeCauses = pgTable(
   "tree_causes",
   {

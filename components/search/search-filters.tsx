@@ -1,4 +1,5 @@
 "use client";
+import { memo } from "react";
 import type { SearchFilters } from "@/lib/search/types";
 import type { Facet } from "@/lib/search/writeup-index";
 
@@ -26,7 +27,8 @@ function FacetSelect({ id, label, facets, value, onChange }: {
   );
 }
 
-export function SearchFilterPanel({ facets, filters, onChange }: {
+/** Memoised, like the results: typing in the search box leaves the filters as they are. */
+export const SearchFilterPanel = memo(function SearchFilterPanel({ facets, filters, onChange }: {
   facets: { families: Facet[]; causes: Facet[]; tags: Facet[] };
   filters: SearchFilters;
   onChange: (next: SearchFilters) => void;
@@ -44,4 +46,4 @@ export function SearchFilterPanel({ facets, filters, onChange }: {
       ) : null}
     </div>
   );
-}
+});

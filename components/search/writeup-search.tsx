@@ -1,8 +1,9 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { EmptyState } from "@/components/ui/empty-state";
 import type { SearchFilters } from "@/lib/search/types";
+import { indexedTerm, MIN_PREFIX } from "@/lib/search/writeup-index";
 import { SearchFilterPanel } from "./search-filters";
 import { focusFirstResult, SearchResults } from "./search-results";
 import { useWriteupIndex } from "./use-writeup-index";
@@ -26,7 +27,9 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
   const hits = useMemo(() => (index ? index.search(deferredQuery, filters) : []), [index, deferredQuery, filters]);
   const facets = useMemo(() => index?.facets() ?? { families: [], causes: [], tags: [] }, [index]);
 
-  useEffect(() => { window.history.replaceState(null, "", searchUrl(query, filters)); }, [query, filters]);
+  // The address names the results on screen, so it follows the query they were found for.
+  useEffect(() => { window.history.replaceState(null, "", searchUrl(deferredQuery, filters)); }, [deferredQuery, filters]);
+  const leaveResults = useCallback(() => input.current?.focus(), []);
 
   // ↓ moves into the result links (Tab reaches them too); Enter in the box opens the best match.
   function onKeyDown(e: React.KeyboardEvent<HTMLInputElement>) {
@@ -65,10 +68,12 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
         </p>
         {index && hits.length === 0 ? (
           <EmptyState title={deferredQuery.trim() ? `No write-up matches “${deferredQuery.trim()}”.` : "No published write-up matches these filters."}>
-            Try fewer words, another spelling, or clear the filters.
+            {deferredQuery.trim().split(/\s+/).some((word) => word.length > 0 && (word.length < MIN_PREFIX || indexedTerm(word) === null))
+              ? "Words of one or two letters match only whole words, and common ones such as “to” or “the” none: keep typing, or clear the filters."
+              : "Try fewer words, another spelling, or clear the filters."}
           </EmptyState>
         ) : (
-          <SearchResults hits={hits} onLeaveTop={() => input.current?.focus()} />
+          <SearchResults hits={hits} onLeaveTop={leaveResults} />
         )}
       </div>
     </div>

@@ -3,6 +3,7 @@ import { count, inArray, notInArray } from "drizzle-orm";
 import { db, sql } from "@/db";
 import { users } from "@/db/schema";
 import { isDemoMode } from "@/lib/auth/demo-mode";
+import { relearnAll } from "@/lib/review/learned";
 import { loadContent } from "@/db/seed/content";
 import { DEMO_ACCOUNTS } from "./accounts";
 import { loadAssemblies, seedAssemblies } from "./assemblies";
@@ -43,6 +44,7 @@ export async function seed(options: { force?: boolean; contentDir?: string; hist
       await seedCompanions(tx, benchDemo, { ...catalogue, userOfRole, versionOf });
       await seedShowcase(tx, benchDemo, { ...catalogue, userOfRole, versionOf });
     }
+    await relearnAll(tx);
   });
   return "seeded";
 }

@@ -5,6 +5,7 @@ import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrad
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
+import { relearn } from "@/lib/review/learned";
 import { storeConfirmedCauses } from "./confirmed-causes";
 import { caseOnlyInput, outcomeFormInput, OTHER_PRIMARY, reopenInput } from "./input";
 import { refreshRepeatLink } from "./repeat";
@@ -18,7 +19,8 @@ export interface OutcomeSaved {
 
 /**
  * Saves the bench outcome of a case on the bench (confirmed causes with one primary, parts,
- * upgrades, labour, notes) and, with intent "close", closes the case in the same transaction.
+ * upgrades, labour, notes) and, with intent "close", closes the case in the same transaction,
+ * where its tree version's learned likelihoods are learned again with it.
  */
 export const saveOutcomeAction = defineAction({
   name: "outcomes.save",
@@ -65,7 +67,10 @@ export const saveOutcomeAction = defineAction({
       const repeatOfCaseId = await refreshRepeatLink(tx, c.id);
 
       const closing = input.intent === "close";
-      if (closing) await moveStatus(tx, c, "closed", user.id);
+      if (closing) {
+        await moveStatus(tx, c, "closed", user.id);
+        await relearn(tx, c.treeVersionId);
+      }
       return {
         ok: true as const,
         data: { caseId: c.id, closed: closing, repeatOfCaseId },
@@ -91,7 +96,10 @@ export const startBenchAction = defineAction({
   },
 });
 
-/** closed → on_bench with a reason, recorded as a "reopened" case event; the outcome can be edited again. */
+/**
+ * closed → on_bench with a reason, recorded as a "reopened" case event; the outcome can be edited
+ * again, and its tree version's learned likelihoods are learned again without it.
+ */
 export const reopenCaseAction = defineAction({
   name: "outcomes.reopen",
   access: "case:reopen",
@@ -101,6 +109,7 @@ export const reopenCaseAction = defineAction({
       const c = await lockCase(tx, input.caseId);
       if (c.status !== "closed") throw new AppError("conflict", "Only a closed case can be reopened.");
       await moveStatus(tx, c, "on_bench", user.id, { kind: "reopened", note: input.reason });
+      await relearn(tx, c.treeVersionId);
       return { ok: true as const, data: { caseId: c.id }, message: `${c.reference} is open on the bench again.` };
     });
   },

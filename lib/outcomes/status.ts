@@ -8,11 +8,12 @@ export type LockedCase = {
   id: number;
   status: CaseStatus;
   reference: string;
+  treeVersionId: number;
 };
 
 /** The case row, locked for the rest of the transaction so a save and a close cannot interleave. */
 export async function lockCase(tx: Tx, caseId: number): Promise<LockedCase> {
-  const rows = await tx.execute<LockedCase>(sql`select id, status, reference from cases where id = ${caseId} for update`);
+  const rows = await tx.execute<LockedCase>(sql`select id, status, reference, tree_version_id as "treeVersionId" from cases where id = ${caseId} for update`);
   if (!rows[0]) throw new AppError("not_found", "That case does not exist.");
   return rows[0];
 }

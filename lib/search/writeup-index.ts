@@ -28,6 +28,34 @@ export function fuzzyDistance(term: string): number {
   return term.length < 4 ? 0 : Math.min(2, Math.ceil(term.length * 0.2));
 }
 
+/**
+ * A query word this long or longer also matches the words it begins; a shorter one matches only
+ * itself. One or two letters begin thousands of the indexed words, and looking them all up took
+ * hundreds of milliseconds a keystroke at 10,000 write-ups, for results no one reads.
+ */
+export const MIN_PREFIX = 3;
+
+export function matchesAsPrefix(term: string): boolean {
+  return term.length >= MIN_PREFIX;
+}
+
+/**
+ * English words too common to tell one write-up from another: left out of the index and of
+ * queries. Typed on their way to a longer word ("to" in "torque"), each matched nearly every
+ * write-up. "s" and "t" are what is left of "maker's" and "don't" once the apostrophe splits them.
+ */
+const STOP_WORDS = new Set([
+  "a", "an", "and", "are", "as", "at", "be", "but", "by", "for", "from", "had", "has", "have", "if", "in", "into", "is", "it",
+  "its", "no", "not", "of", "on", "or", "s", "so", "t", "than", "that", "the", "then", "there", "this", "to", "was", "were",
+  "when", "with",
+]);
+
+/** A word as indexed and searched: lower case, or nothing for a stop word. */
+export function indexedTerm(term: string): string | null {
+  const lower = term.toLowerCase();
+  return STOP_WORDS.has(lower) ? null : lower;
+}
+
 /** Fewer exact-or-prefix results than this, and the search tries near misses too. */
 export const FUZZY_BELOW = 10;
 
@@ -67,7 +95,8 @@ export const MINI_OPTIONS: Options<SearchDoc> & { fields: string[] } = {
   fields: [...FIELDS],
   storeFields: [],
   extractField: fieldText,
-  searchOptions: { boost: FIELD_BOOSTS, prefix: true, fuzzy: fuzzyDistance },
+  processTerm: indexedTerm,
+  searchOptions: { boost: FIELD_BOOSTS, prefix: matchesAsPrefix, fuzzy: fuzzyDistance },
 };
 
 /**
@@ -104,8 +133,9 @@ export class WriteupIndex {
   }
 
   /**
-   * Results as you type. Every word must match (prefix or near miss); when that finds nothing,
-   * any word may. An empty query lists the filtered write-ups, newest first.
+   * Results as you type. Every word must match (itself, a word it begins from MIN_PREFIX letters
+   * on, or a near miss); when that finds nothing, any word may. An empty query lists the filtered
+   * write-ups, newest first.
    */
   search(query: string, filters: SearchFilters = {}, limit = 50): WriteupHit[] {
     if (!query.trim()) {

@@ -2,8 +2,8 @@ import "server-only";
 import { sql } from "@/db";
 import type { CaseStatus } from "@/db/schema";
 import type { DxSettings } from "@/lib/diagnosis";
-import type { LikelihoodMode } from "@/lib/review/in-use";
-import { likelihoodsFor } from "@/lib/review/learned";
+import { likelihoodsInUse, type LikelihoodMode } from "@/lib/review/in-use";
+import { storedLikelihoods } from "@/lib/review/learned";
 import { DIAGNOSIS_SETTINGS_KEY, dxSettingsFor } from "./dx-settings";
 import { familyHistory } from "./history";
 
@@ -33,13 +33,15 @@ interface Row {
   settings: unknown;
   settings_hash: string | null;
   likelihood_mode: string;
+  learned_from: number;
 }
 
 /**
- * The case, its steps, the shop's settings and the tree's likelihood setting (one query, no lock),
- * then the confirmed history of the case's motor family and, where the tree's setting and history
- * say so, the likelihoods learned from its closed cases. With `historyAsOfStart`, the history counts only
- * cases closed before this one was started, as its technician's screen did.
+ * The case, its steps, the shop's settings, the tree's likelihood setting and how many closed
+ * cases its version's stored table was learned from (one query, no lock), then the confirmed
+ * history of the case's motor family and, where the tree's setting and that count say so, the
+ * stored learned likelihoods. With `historyAsOfStart`, the history counts only cases closed
+ * before this one was started, as its technician's screen did.
  */
 export async function loadCaseContext(caseId: number, options: { historyAsOfStart?: boolean } = {}): Promise<CaseContext | null> {
   const [row] = await sql<Row[]>`
@@ -47,13 +49,17 @@ export async function loadCaseContext(caseId: number, options: { historyAsOfStar
       coalesce((select json_agg(json_build_array(s.id, s.seq, s.node_id, s.option_id) order by s.seq)
                 from case_steps s where s.case_id = c.id), '[]'::json) as steps,
       st.value as settings, md5(st.value::text) as settings_hash,
-      (select t.likelihood_mode from tree_versions v join trees t on t.id = v.tree_id where v.id = c.tree_version_id) as likelihood_mode
+      (select t.likelihood_mode from tree_versions v join trees t on t.id = v.tree_id where v.id = c.tree_version_id) as likelihood_mode,
+      coalesce((select l.cases from learned_likelihoods l where l.version_id = c.tree_version_id), 0) as learned_from
     from cases c left join settings st on st.key = ${DIAGNOSIS_SETTINGS_KEY}
     where c.id = ${caseId}`;
   if (!row) return null;
-  const history = await familyHistory(row.family_id, options.historyAsOfStart ? new Date(row.created_ms) : undefined);
+  const learning = likelihoodsInUse(row.likelihood_mode as LikelihoodMode, row.learned_from).source === "learned";
+  const [history, learned] = await Promise.all([
+    familyHistory(row.family_id, options.historyAsOfStart ? new Date(row.created_ms) : undefined),
+    learning ? storedLikelihoods(row.tree_version_id) : undefined,
+  ]);
   const settings = dxSettingsFor(row.settings, history);
-  const learned = await likelihoodsFor(row.tree_version_id, row.likelihood_mode as LikelihoodMode);
   if (learned) settings.likelihoods = learned;
   return {
     id: row.id,

@@ -3,8 +3,13 @@
 //    until the new ranking is painted: first the screen's own (the engine in the browser), then the
 //    server's (the step stored and confirmed). Beside it, in the same run and interleaved, the floor:
 //    a key that only makes a round trip behind the same session check (GET /api/session) and paints
-//    its answer. Measured alone, then while 50 virtual technicians answer through the same server
-//    action in the background.
+//    its answer. Measured alone, then under load.
+//  - "Under load" is a shop of 50 technicians on the phone (BENCH_LOAD_WALKERS), each answering
+//    through the screen's server action and thinking 30 to 45 s before each answer
+//    (BENCH_LOAD_THINK_MS, "min-max"), as a technician with a caller does; their first answers are
+//    spread over the first 45 s, and measuring starts once all of them are under way. The budget
+//    applies to that. For information the same is measured at ten times the pace, 3 to 4.5 s of
+//    thought (BENCH_STRESS_THINK_MS): a stress figure, no budget.
 //  - search: each keystroke typed into the write-up search at BENCH_WRITEUPS (10,000) write-ups,
 //    until the results for what has been typed are painted.
 // Budgets on a 2-core machine: answer p95 ≤ 50 ms alone and ≤ 150 ms under load; search p95 ≤ 50 ms.
@@ -12,13 +17,15 @@ import { eq } from "drizzle-orm";
 import { chromium, type Page } from "playwright-core";
 import { db, sql } from "@/db";
 import { users } from "@/db/schema";
-import { auditSteps, runLoad } from "../load/walkers";
+import { auditSteps, parseThinkTime, runLoad, type ThinkTime } from "../load/walkers";
 import { setUpGeneratedCase, STEPS } from "./support/generated-case";
 import { COUNT, generateWriteups, removeGenerated, WORDS } from "./support/writeups";
 
 const BASE = process.env.BENCH_BASE_URL ?? "http://127.0.0.1:3200";
 const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 40);
 const LOAD_WALKERS = Number(process.env.BENCH_LOAD_WALKERS ?? 50);
+const SHOP_THINK = parseThinkTime(process.env.BENCH_LOAD_THINK_MS, { min: 30_000, max: 45_000 });
+const STRESS_THINK = parseThinkTime(process.env.BENCH_STRESS_THINK_MS, { min: 3_000, max: 4_500 });
 
 /**
  * Installed in the page: times from a key's keydown to the frame after `done()` first holds,
@@ -125,6 +132,18 @@ async function measureSearch(page: Page): Promise<number[]> {
   return times;
 }
 
+/** The triage measurement while LOAD_WALKERS technicians answer in the background with this think time. */
+async function measureUnderLoad(page: Page, userId: string, thinkMs: ThinkTime) {
+  const stop = { at: Date.now() + 3_600_000 };
+  const load = runLoad({ baseUrl: BASE, walkers: LOAD_WALKERS, seconds: 3600, userId, stop, thinkMs });
+  await page.waitForTimeout(thinkMs.max + 2000); // every walker has started answering
+  const measured = await measureTriage(page, SAMPLES).finally(() => { stop.at = 0; });
+  const background = await load;
+  return { ...measured, background, audit: await auditSteps(background) };
+}
+
+const seconds = (ms: number) => `${(ms / 1000).toFixed(ms % 1000 ? 1 : 0)}`;
+
 const quantile = (values: number[], q: number) => {
   const sorted = [...values].sort((a, b) => a - b);
   return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
@@ -155,13 +174,8 @@ async function main() {
     await measureTriage(page, 5); // warm-up: the server's and the browser's first runs
     const alone = await measureTriage(page, SAMPLES);
 
-    // The same again while 50 technicians answer through the screen's server action.
-    const stop = { at: Date.now() + 600_000 };
-    const load = runLoad({ baseUrl: BASE, walkers: LOAD_WALKERS, seconds: 600, userId: tech.id, stop });
-    await page.waitForTimeout(5000); // let the walkers get going
-    const loaded = await measureTriage(page, SAMPLES).finally(() => { stop.at = 0; });
-    const background = await load;
-    const audit = await auditSteps(background);
+    const shop = await measureUnderLoad(page, tech.id, SHOP_THINK);
+    const stress = await measureUnderLoad(page, tech.id, STRESS_THINK);
 
     await generateWriteups();
     const search = await measureSearch(page);
@@ -171,10 +185,16 @@ async function main() {
     console.log(row("answer: ranking painted, screen's own", alone.answer.map((t) => t.optimistic ?? t.total)));
     console.log(row("answer: server's ranking painted", alone.answer.map((t) => t.total), 50));
     console.log(row("floor: no-op round trip, same session check", alone.floor.map((t) => t.total)));
-    console.log(row(`under load: screen's own`, loaded.answer.map((t) => t.optimistic ?? t.total)));
-    console.log(row(`under load: server's ranking painted`, loaded.answer.map((t) => t.total), 150));
-    console.log(row(`under load: floor`, loaded.floor.map((t) => t.total)));
-    console.log(`  background: ${LOAD_WALKERS} technicians, ${background.ok} answers stored (${background.failed} failed ${JSON.stringify(background.errors)}), median ${quantile(background.latenciesMs, 0.5).toFixed(1)} ms, p95 ${quantile(background.latenciesMs, 0.95).toFixed(1)} ms; steps missing ${audit.missing}`);
+    const loadRows = (name: string, think: ThinkTime, run: typeof shop, budget?: number) => {
+      console.log(`${name}: ${LOAD_WALKERS} technicians each thinking ${seconds(think.min)}–${seconds(think.max)} s before an answer`);
+      console.log(row(`  screen's own`, run.answer.map((t) => t.optimistic ?? t.total)));
+      console.log(row(`  server's ranking painted`, run.answer.map((t) => t.total), budget));
+      console.log(row(`  floor`, run.floor.map((t) => t.total)));
+      console.log(`    background: ${run.background.ok} answers stored (${run.background.failed} failed ${JSON.stringify(run.background.errors)}), ` +
+        `median ${quantile(run.background.latenciesMs, 0.5).toFixed(1)} ms, p95 ${quantile(run.background.latenciesMs, 0.95).toFixed(1)} ms; steps missing ${run.audit.missing}`);
+    };
+    loadRows("under load, a shop", SHOP_THINK, shop, 150);
+    loadRows("stress, ten times a shop's pace (no budget)", STRESS_THINK, stress);
     console.log(row(`search: keystroke to results painted (${COUNT} write-ups)`, search, 50));
   } finally {
     await browser.close();

@@ -1,4 +1,5 @@
-// npm run load: 50 technicians walking cases for 60 s against a production server, then /api/health
+// npm run load: 50 technicians walking cases for 60 s against a production server, answering back
+// to back (a stress test: a real shop answers every 30–45 s; LOAD_THINK_MS="min-max" paces them), then /api/health
 // under the same concurrency, then the faults: PostgreSQL restarted mid-load, and the SMTP server
 // down for a minute while mail is queued. Talks only to 127.0.0.1; every loop is bounded.
 import { execFileSync, spawn } from "node:child_process";
@@ -10,12 +11,13 @@ import { outboxDeliverer } from "@/lib/mail/deliver";
 import { startFakeSmtp } from "@/lib/mail/fake-smtp";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { smtpTransport } from "@/lib/mail/transport";
-import { auditSteps, percentile, runLoad } from "./walkers";
+import { auditSteps, parseThinkTime, percentile, runLoad } from "./walkers";
 
 const baseUrl = process.env.LOAD_BASE_URL ?? "http://127.0.0.1:3300";
 const walkers = Number(process.env.LOAD_WALKERS ?? 50);
 const seconds = Number(process.env.LOAD_SECONDS ?? 60);
 const smtpPort = Number(process.env.LOAD_SMTP_PORT ?? 2727);
+const thinkMs = process.env.LOAD_THINK_MS ? parseThinkTime(process.env.LOAD_THINK_MS, { min: 0, max: 0 }) : undefined;
 
 const fmt = (n: number) => n.toFixed(1).padStart(8);
 
@@ -73,9 +75,9 @@ async function clusterRun(techId: string) {
 async function main() {
   const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.role, "tech")).limit(1);
   if (process.env.LOAD_KILL_PID) return clusterRun(tech.id);
-  console.log(`load: ${walkers} technicians for ${seconds} s against ${baseUrl}`);
+  console.log(`load: ${walkers} technicians for ${seconds} s against ${baseUrl}, ${thinkMs ? `thinking ${thinkMs.min}–${thinkMs.max} ms before each answer` : "answering back to back"}`);
 
-  const steady = await runLoad({ baseUrl, walkers, seconds, userId: tech.id });
+  const steady = await runLoad({ baseUrl, walkers, seconds, userId: tech.id, thinkMs });
   const steadyAudit = await auditSteps(steady);
   const health = await healthUnderLoad(Math.min(20, seconds));
   console.log("\nphase        requests  errors  req/s     median ms  p95 ms");

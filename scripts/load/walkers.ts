@@ -2,7 +2,10 @@
 // benchmark. Each walker keeps one case going, answers its current question with a random option,
 // and starts a new case when the walk ends. Answers go the way the triage screen sends them (the
 // answerStep server action, as the browser posts it) or through POST /api/cases/:id/steps.
-// Bounded by time and request count.
+// With `thinkMs`, a walker waits a random time in that range before each answer, as a technician
+// on the phone does (30–45 s in a real shop), its first wait drawn over the whole range so the
+// walkers' answers are spread out from the start; without it they answer back to back, which is a
+// stress and fault test, not a shop. Bounded by time and request count.
 import { asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { caseSteps, motorFamilies, treeScope, treeVersions, trees } from "@/db/schema";
@@ -24,6 +27,21 @@ export interface LoadOptions {
   via?: "screen" | "route";
   /** Ends the run early once Date.now() passes `at` (set by the caller while the run goes on). */
   stop?: { at: number };
+  /** The pause before each answer, drawn uniformly from [min, max] ms; none when absent. */
+  thinkMs?: ThinkTime;
+}
+
+export interface ThinkTime {
+  min: number;
+  max: number;
+}
+
+/** "30000-45000" (or one number) as a think time; `fallback` when the text is empty. */
+export function parseThinkTime(text: string | undefined, fallback: ThinkTime): ThinkTime {
+  if (!text?.trim()) return fallback;
+  const [min, max = min] = text.split("-").map((part) => Number(part.trim()));
+  if (!Number.isFinite(min) || !Number.isFinite(max) || min < 0 || max < min) throw new Error(`A think time is "min-max" in milliseconds, not "${text}"`);
+  return { min, max };
 }
 
 export interface LoadResult {
@@ -92,9 +110,22 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
     return value.ok ? { stepId: value.data.step.id } : { error: `action ${value.status}` };
   }
 
+  /** Waits `ms`, or less once the run is over. */
+  async function pause(ms: number) {
+    const until = Date.now() + ms;
+    while (running() && Date.now() < until) await new Promise((r) => setTimeout(r, Math.min(250, until - Date.now())));
+  }
+
   async function walker(index: number) {
     const { token } = await createSession(options.userId);
     const cookie = `rb_session=${token}`;
+    const think = options.thinkMs;
+    let first = true;
+    const thinkBeforeAnswer = async () => {
+      if (!think) return;
+      await pause(first ? Math.random() * think.max : think.min + Math.random() * (think.max - think.min));
+      first = false;
+    };
     while (running() && result.requests < max) {
       const { graph, familyId } = treesAvailable[(index + counter++) % treesAvailable.length];
       const dx = toDxTree(graph);
@@ -116,6 +147,8 @@ export async function runLoad(options: LoadOptions): Promise<LoadResult> {
         const choices = graph.options.filter((o) => o.fromKey === current);
         const option = choices[Math.floor(Math.random() * choices.length)];
         const node = graph.nodes.find((n) => n.key === current)!;
+        await thinkBeforeAnswer();
+        if (!running()) break;
         const started = performance.now();
         result.requests++;
         try {

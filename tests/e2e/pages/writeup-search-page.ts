@@ -26,6 +26,11 @@ export class WriteupSearchPage {
     return this.page.getByTestId("search-results").getByRole("listitem");
   }
 
+  /** The "Show N more" button under the results. */
+  more() {
+    return this.page.getByTestId("search-more");
+  }
+
   async type(text: string): Promise<void> {
     await this.input().fill("");
     await this.input().pressSequentially(text, { delay: 40 });

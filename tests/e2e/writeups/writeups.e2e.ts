@@ -36,6 +36,26 @@ describe("a trainee searches the write-ups and reads one", () => {
     await screenshot(browser.page, "writeups-search-typo");
   });
 
+  it("paints the first ten results and ten more on each request; one or two letters match whole words only", async () => {
+    const search = new WriteupSearchPage(browser.page);
+    await search.open();
+    // An empty query lists the newest fifty of the demo's sixty-odd published write-ups.
+    expect(await search.status().innerText()).toMatch(/^50\+ of \d{2} write-ups, newest first/);
+    for (const shown of [10, 20, 30, 40]) {
+      expect(await search.results().count()).toBe(shown);
+      expect(await search.more().innerText()).toBe("Show 10 more");
+      await search.more().click();
+    }
+    expect(await search.results().count()).toBe(50);
+    expect(await search.more().count()).toBe(0);
+    // "se" begins "seal", "seized", … but is no word of its own: nothing, and the hint says why.
+    await search.type("se");
+    expect(await search.results().count()).toBe(0);
+    expect(await browser.page.getByText(/Words of one or two letters match only whole words/).count()).toBe(1);
+    await search.type("sea");
+    expect(await search.results().count()).toBeGreaterThan(0);
+  });
+
   it("moves into the result links with the arrow keys and opens one with Enter", async () => {
     const search = new WriteupSearchPage(browser.page);
     await search.type("seal");

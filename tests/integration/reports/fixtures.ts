@@ -3,6 +3,7 @@ import { db } from "@/db";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions, type CaseStatus } from "@/db/schema";
 import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
+import { relearn } from "@/lib/review/learned";
 import { loadGraph } from "@/lib/trees/graph";
 
 /** Catalogue and tree ids of the demo content loaded by resetToDemo(). */
@@ -76,7 +77,10 @@ export interface CaseSpec {
 
 let counter = 0;
 
-/** Inserts cases with their outcomes in bulk; returns their ids in spec order. */
+/**
+ * Inserts cases with their outcomes in bulk, then learns the touched versions' likelihood tables
+ * again, as the seed does after its history; returns their ids in spec order.
+ */
 export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<number[]> {
   const out: number[] = [];
   for (let start = 0; start < specs.length; start += 400) {
@@ -116,6 +120,10 @@ export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<numb
     });
     if (stepRows.length) await db.insert(caseSteps).values(stepRows);
   }
+  const versions = [...new Set(specs.map((s) => ids.version(s.tree).id))].sort((a, b) => a - b);
+  await db.transaction(async (tx) => {
+    for (const v of versions) await relearn(tx, v);
+  });
   return out;
 }
 

@@ -8,7 +8,7 @@ import { DIAGNOSIS_SETTINGS_KEY } from "@/lib/triage/dx-settings";
 import { learnLikelihoods } from "@/lib/diagnosis";
 import { closedCasesOf } from "@/lib/review/closed-cases";
 import { ENOUGH_HISTORY } from "@/lib/review/in-use";
-import { likelihoodsFor } from "@/lib/review/learned";
+import { storedLikelihoods } from "@/lib/review/learned";
 import { reviewVersion } from "@/lib/review/review";
 import { treeReview } from "@/lib/review/queries";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
@@ -77,12 +77,12 @@ describe("evidence review from closed cases", () => {
     }
   });
 
-  it("likelihoodsFor learns from the closed cases as they are at each call", async () => {
-    const first = await likelihoodsFor(versionId, "learned");
+  it("the stored table is what the engine learns from the closed cases as they are after each change", async () => {
+    const first = await storedLikelihoods(versionId);
+    expect(first).toEqual((await reviewVersion(versionId)).likelihoods);
     expect(first![OPTION][CAUSE]).toBeGreaterThan(0.99);
-    expect(await likelihoodsFor(versionId, "authored")).toBeUndefined();
     await insertCases(ids, [{ ...bolts, answers: ["o-when-load"], closedAt: day("2025-04-02") }]);
-    const after = await likelihoodsFor(versionId, "learned");
+    const after = await storedLikelihoods(versionId);
     const graph = (await loadGraph(versionId))!;
     expect(after).toEqual(learnLikelihoods(toDxTree(graph), await closedCasesOf(versionId)).likelihoods);
     expect(after![OPTION][CAUSE]).toBeLessThan(first![OPTION][CAUSE]);
@@ -131,10 +131,9 @@ describe("evidence review from closed cases", () => {
   it("left to decide, a tree scores with learned likelihoods once its published version has enough closed cases", async () => {
     const { cases: closed } = await reviewVersion(versionId);
     expect(closed).toBeLessThan(ENOUGH_HISTORY);
-    expect(await likelihoodsFor(versionId, "auto")).toBeUndefined();
     expect((await treeReview(treeId))!.inUse).toMatchObject({ source: "authored", why: expect.stringContaining(`${closed} closed cases`) });
     await insertCases(ids, times(ENOUGH_HISTORY - closed, { ...bolts, closedAt: day("2025-04-03") }));
-    expect(await likelihoodsFor(versionId, "auto")).toEqual((await reviewVersion(versionId)).likelihoods);
+    expect(await storedLikelihoods(versionId)).toEqual((await reviewVersion(versionId)).likelihoods);
     expect((await treeReview(treeId))!.inUse).toMatchObject({ source: "learned", why: expect.stringContaining(`${ENOUGH_HISTORY} closed cases`) });
   });
 });

@@ -6,7 +6,7 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { answerStepAction } from "@/lib/triage/answer";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { undoStepAction } from "@/lib/triage/undo";
-import { likelihoodsFor } from "@/lib/review/learned";
+import { storedLikelihoods } from "@/lib/review/learned";
 import { rankNextQuestions, scoreCauses, suggestConclusion, type DxAnswer } from "@/lib/diagnosis";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import { countRows, createUser, db } from "../../support/db";
@@ -109,7 +109,7 @@ describe("walking a case through a seeded tree", () => {
     try {
       const answers = await walk(2);
       const dx = toDxTree((await loadGraph(versionId))!);
-      const likelihoods = await likelihoodsFor(versionId, "learned");
+      const likelihoods = await storedLikelihoods(versionId);
       const last = (await stepsOf(caseId)).at(-1)!.ranking as StoredRanking;
       expect(last.causes).toEqual(scoreCauses(dx, answers, { history, likelihoods }).causes);
     } finally {

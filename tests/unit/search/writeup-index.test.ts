@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fuzzyDistance, serializeIndex, WriteupIndex } from "@/lib/search/writeup-index";
+import { fuzzyDistance, indexedTerm, matchesAsPrefix, serializeIndex, WriteupIndex } from "@/lib/search/writeup-index";
 import { comparable } from "../../support/search";
 import { doc, DOCS } from "./docs";
 
@@ -24,6 +24,27 @@ describe("write-up search", () => {
     expect(ids(index.search("needle bea"))).toEqual([2]);
     expect(ids(index.search("crank bear"))).toEqual(expect.arrayContaining([5, 2]));
     expect(index.search("crank bear")[0].doc.id).toBe(5);
+  });
+
+  it("a word of one or two letters matches only itself, not every word it begins", () => {
+    // DOCS have "bearing" and "belt" but no word "b" or "be": from three letters the prefix counts.
+    expect(index.search("b")).toEqual([]);
+    expect(index.search("be")).toEqual([]);
+    expect(ids(index.search("bea"))).toEqual(expect.arrayContaining([2, 5]));
+    const short = new WriteupIndex([doc(20, { title: "O ring seated", text: "" }), doc(21, { title: "Oil on the rotor", text: "" })]);
+    expect(ids(short.search("o"))).toEqual([20]);
+    expect(ids(short.search("oi"))).toEqual([]);
+    expect(ids(short.search("oil"))).toEqual([21]);
+    expect([matchesAsPrefix("be"), matchesAsPrefix("bea")]).toEqual([false, true]);
+  });
+
+  it("leaves common English words out of the index and of queries", () => {
+    const common = new WriteupIndex([doc(30, { title: "Water in the motor", text: "" }), doc(31, { title: "Tools to use", text: "" })]);
+    expect(common.search("the")).toEqual([]);
+    expect(common.search("to")).toEqual([]);
+    expect(ids(common.search("water the motor"))).toEqual([30]);
+    expect(ids(common.search("too"))).toEqual([31]);
+    expect([indexedTerm("The"), indexedTerm("Torque")]).toEqual([null, "torque"]);
   });
 
   it("ranks a title match above a body match", () => {
