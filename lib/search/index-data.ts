@@ -1,18 +1,25 @@
 import "server-only";
 import { sql } from "drizzle-orm";
-import { db } from "@/db";
-import { indexEtag } from "./etag";
+import { db, type Db, type Tx } from "@/db";
+import { indexEtag, type IndexVersion } from "./etag";
 import { markdownToPlainText } from "./plain-text";
 import type { SearchDoc, WriteupIndexPayload } from "./types";
 import { serializeIndex } from "./writeup-index";
-import { logFailure } from "@/lib/log/failure";
 
-/** Count and latest change of the published write-ups: one indexed query, cheap enough for every request. */
-export async function writeupIndexVersion(): Promise<{ count: number; maxUpdatedAt: Date | null }> {
-  const [row] = await db.execute<{ count: number; max: string | null }>(
-    sql`select count(*)::int as count, max(updated_at) as max from writeups where status = 'published'`,
-  );
-  return { count: row.count, maxUpdatedAt: row.max ? new Date(row.max) : null };
+/**
+ * Count and latest change of the published write-ups, and a digest of the catalogue names their
+ * index carries: one query over the write-ups' index and three small catalogue tables, cheap enough
+ * for every request.
+ */
+export async function writeupIndexVersion(conn: Db | Tx = db): Promise<IndexVersion> {
+  const [row] = await conn.execute<{ count: number; max: string | null; catalogue: string }>(sql`
+    select count(*)::int as count, max(updated_at) as max,
+      md5(concat_ws('#',
+        (select string_agg(c.id || '/' || c.slug || '/' || c.name, '|' order by c.id) from causes c),
+        (select string_agg(f.id || '/' || f.slug || '/' || f.name || ' ' || f.generation, '|' order by f.id) from motor_families f),
+        (select string_agg(p.id || '/' || p.name, '|' order by p.id) from parts p))) as catalogue
+    from writeups where status = 'published'`);
+  return { count: row.count, maxUpdatedAt: row.max ? new Date(row.max) : null, catalogue: row.catalogue };
 }
 
 type Pair = [string, string];
@@ -23,7 +30,6 @@ interface Row extends Record<string, unknown> {
   body: string;
   tags: string[];
   published_at: string | null;
-  updated_at: string;
   causes: Pair[];
   families: Pair[];
   parts: string[];
@@ -31,8 +37,11 @@ interface Row extends Record<string, unknown> {
 
 /** Every published write-up's searchable fields (drafts never leave the server this way) and their version. */
 export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
-  const rows = await db.execute<Row>(sql`
-    select w.id, w.title, w.summary, w.body, w.tags, w.published_at, w.updated_at,
+  // One snapshot for the rows and the version that names them.
+  const { version, rows } = await db.transaction(async (tx) => ({
+    version: await writeupIndexVersion(tx),
+    rows: await tx.execute<Row>(sql`
+    select w.id, w.title, w.summary, w.body, w.tags, w.published_at,
       coalesce((select json_agg(json_build_array(c.slug, c.name) order by c.name)
         from writeup_causes wc join causes c on c.id = wc.cause_id where wc.writeup_id = w.id), '[]') as causes,
       coalesce((select json_agg(json_build_array(f.slug, f.name || ' ' || f.generation) order by f.name, f.generation)
@@ -41,12 +50,8 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
         from writeup_parts wp join parts p on p.id = wp.part_id where wp.writeup_id = w.id), '[]') as parts
     from writeups w
     where w.status = 'published'
-    order by w.published_at desc nulls last, w.id desc`);
-  let maxUpdatedAt: Date | null = null;
-  for (const r of rows) {
-    const at = new Date(r.updated_at);
-    if (!maxUpdatedAt || at > maxUpdatedAt) maxUpdatedAt = at;
-  }
+    order by w.published_at desc nulls last, w.id desc`),
+  }), { isolationLevel: "repeatable read", accessMode: "read only" });
   const docs = rows.map((r): SearchDoc => ({
     id: r.id,
     title: r.title,
@@ -60,10 +65,11 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
     tags: r.tags,
     publishedAt: r.published_at ? new Date(r.published_at).toISOString() : null,
   }));
-  return { version: indexEtag({ count: rows.length, maxUpdatedAt }), docs, index: await serializeIndex(docs) };
+  return { version: indexEtag(version), docs, index: await serializeIndex(docs) };
 }
 
-// The last body built, by version: an unchanged corpus is neither queried nor serialised again.
+// The last body built, by version. Safe to keep: the version names everything the body is made of
+// (the published write-ups and the catalogue names they carry), so a body is never served for another.
 // A build in progress is shared, so requests arriving while it runs wait for the same one.
 let cached: Promise<{ etag: string; json: string }> | null = null;
 let cachedEtag: string | null = null;
@@ -84,12 +90,4 @@ export async function currentWriteupIndex(): Promise<{ etag: string; body: () =>
       return building;
     },
   };
-}
-
-/**
- * Builds the body for the corpus as it is now, in the background: called after a publish, so the
- * next reader does not wait for the index of every write-up to be built (seconds at 10,000).
- */
-export function prepareWriteupIndex(): void {
-  void currentWriteupIndex().then((index) => index.body()).catch((error: unknown) => logFailure("write-up index build failed", error));
 }

@@ -1,6 +1,5 @@
 import "server-only";
 import { defineAction } from "@/lib/actions/define";
-import { prepareWriteupIndex } from "@/lib/search/index-data";
 import { writeupIdInput, writeupInput } from "./input";
 import { publishWriteup, saveWriteup } from "./save";
 
@@ -10,7 +9,6 @@ export const saveWriteupAction = defineAction({
   input: writeupInput,
   async run(input, { user }) {
     const saved = await saveWriteup(input, user);
-    if (saved.status === "published") prepareWriteupIndex();
     return { ok: true as const, data: saved, message: saved.status === "published" ? "Published." : "Draft saved." };
   },
 });
@@ -21,7 +19,6 @@ export const publishWriteupAction = defineAction({
   input: writeupIdInput,
   async run(input, { user }) {
     const published = await publishWriteup(input.id, user);
-    prepareWriteupIndex();
     return { ok: true as const, data: published, message: "Published." };
   },
 });

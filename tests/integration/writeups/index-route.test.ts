@@ -2,7 +2,7 @@ import { rmSync } from "node:fs";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET } from "@/app/api/writeups/index/route";
-import { uploads, writeups } from "@/db/schema";
+import { causes, uploads, writeups } from "@/db/schema";
 import { executeAction } from "@/lib/actions/define";
 import type { WriteupIndexPayload } from "@/lib/search/types";
 import { currentWriteupIndex } from "@/lib/search/index-data";
@@ -51,7 +51,7 @@ describe("GET /api/writeups/index", () => {
   it("answers 304 to a matching If-None-Match, and publishing a write-up changes the ETag", async () => {
     const first = await fetchIndex(users.tech.token);
     const etag = first.headers.get("etag")!;
-    expect(etag).toMatch(/^"wi-\d+-\d+"$/);
+    expect(etag).toMatch(/^"wi-\d+-\d+-[0-9a-f]{16}"$/);
     expect(first.headers.get("cache-control")).toBe("private, no-cache");
     const again = await fetchIndex(users.tech.token, { "if-none-match": etag });
     expect(again.status).toBe(304);
@@ -69,7 +69,7 @@ describe("GET /api/writeups/index", () => {
 });
 
 describe("the index body on the server", () => {
-  it("is built once per version: readers arriving during a build share it, and a publish starts the next one", async () => {
+  it("is built once per version: readers arriving during a build share it, and a publish makes a new version", async () => {
     const [a, b] = await Promise.all([currentWriteupIndex(), currentWriteupIndex()]);
     expect(a.body()).toBe(b.body());
     const built = await a.body();
@@ -82,6 +82,22 @@ describe("the index body on the server", () => {
     // The body for the new version carries the write-up just published.
     const body = await next.body();
     expect((JSON.parse(body.json) as WriteupIndexPayload).docs.some((d) => d.id === draft.id)).toBe(true);
+  });
+
+  it("is a new version when a cause the write-ups name is renamed, and carries the new name", async () => {
+    const before = await currentWriteupIndex();
+    const named = (JSON.parse((await before.body()).json) as WriteupIndexPayload).docs.find((d) => d.causeSlugs.length > 0)!;
+    const slug = named.causeSlugs[0];
+    const [cause] = await db.select().from(causes).where(eq(causes.slug, slug));
+    await db.update(causes).set({ name: `${cause.name} (renamed)` }).where(eq(causes.id, cause.id));
+    try {
+      const after = await currentWriteupIndex();
+      expect(after.etag).not.toBe(before.etag);
+      const doc = (JSON.parse((await after.body()).json) as WriteupIndexPayload).docs.find((d) => d.id === named.id)!;
+      expect(doc.causes).toContain(`${cause.name} (renamed)`);
+    } finally {
+      await db.update(causes).set({ name: cause.name }).where(eq(causes.id, cause.id));
+    }
   });
 });
 

@@ -44,16 +44,18 @@ describe("highlighting matched words", () => {
 });
 
 describe("the index ETag", () => {
-  it("changes with the count and with the latest change", () => {
+  it("changes with the count, the latest change and the catalogue names", () => {
     const at = new Date("2025-08-14T10:00:00.000Z");
-    const base = indexEtag({ count: 3, maxUpdatedAt: at });
-    expect(indexEtag({ count: 4, maxUpdatedAt: at })).not.toBe(base);
-    expect(indexEtag({ count: 3, maxUpdatedAt: new Date(at.getTime() + 1) })).not.toBe(base);
-    expect(indexEtag({ count: 3, maxUpdatedAt: new Date(at) })).toBe(base);
+    const catalogue = "0123456789abcdef0123456789abcdef";
+    const base = indexEtag({ count: 3, maxUpdatedAt: at, catalogue });
+    expect(indexEtag({ count: 4, maxUpdatedAt: at, catalogue })).not.toBe(base);
+    expect(indexEtag({ count: 3, maxUpdatedAt: new Date(at.getTime() + 1), catalogue })).not.toBe(base);
+    expect(indexEtag({ count: 3, maxUpdatedAt: at, catalogue: "f" + catalogue.slice(1) })).not.toBe(base);
+    expect(indexEtag({ count: 3, maxUpdatedAt: new Date(at), catalogue })).toBe(base);
   });
 
   it("matches If-None-Match lists, weak tags and the wildcard", () => {
-    const tag = indexEtag({ count: 1, maxUpdatedAt: null });
+    const tag = indexEtag({ count: 1, maxUpdatedAt: null, catalogue: "" });
     expect(etagMatches(tag, tag)).toBe(true);
     expect(etagMatches(`"other", W/${tag}`, tag)).toBe(true);
     expect(etagMatches("*", tag)).toBe(true);
