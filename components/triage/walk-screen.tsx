@@ -1,5 +1,5 @@
 "use client";
-import { useMemo, useOptimistic, useState, useTransition } from "react";
+import { startTransition, useMemo, useOptimistic, useState, useTransition } from "react";
 import { answerStep, undoStep } from "@/app/(shop)/triage/actions";
 import { Panel } from "@/components/ui/panel";
 import { rideAdvice } from "@/lib/triage/safety";
@@ -22,7 +22,7 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
   const [base, setBase] = useState<WalkState>({ steps, startRanking });
   const reducer = useMemo(() => optimisticWalk(tree.dx, settings), [tree.dx, settings]);
   const [state, change] = useOptimistic(base, reducer);
-  const [pending, startTransition] = useTransition();
+  const [pending, startAction] = useTransition();
   const [error, setError] = useState<string | null>(null);
   const [focus, setFocus] = useState<string | null>(null);
   const [skipped, setSkipped] = useState<ReadonlySet<string>>(new Set());
@@ -53,13 +53,16 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
   function answer(option: ViewOption) {
     if (pending || !current) return;
     setError(null);
-    startTransition(async () => {
+    startAction(async () => {
       change({ type: "answer", nodeKey: current.key, optionKey: option.key });
       const form = new FormData();
       form.set("caseId", String(kase.id));
       form.set("nodeId", String(current.id));
       form.set("optionId", String(option.id));
       const result = await answerStep(null, form);
+      // React's startTransition, not the hook's: the hook's would set pending again, an extra
+      // render of the whole screen before this one. This update joins the running action, so the
+      // confirmed step, pending and the optimistic state all change in one render.
       startTransition(() => {
         if (result?.ok) {
           const { step, ranking: confirmed } = result.data;
@@ -76,7 +79,7 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
     const last = base.steps.at(-1);
     if (pending || !last) return;
     setError(null);
-    startTransition(async () => {
+    startAction(async () => {
       change({ type: "undo" });
       const form = new FormData();
       form.set("caseId", String(kase.id));
