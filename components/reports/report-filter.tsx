@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { FamilySelect } from "./family-select";
 import { filterQuery, PRESET_MONTHS, type ReportFilter } from "@/lib/reports/period";
 
 /** Period presets as links, the family and a custom range as plain GET forms: the report lives in its URL. */
@@ -36,13 +37,7 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
               <input type="hidden" name="to" value={filter.period.toDay} />
             </>
           )}
-          <label className="flex flex-col gap-1 text-sm font-medium text-ink-soft">
-            Motor family
-            <select name="family" defaultValue={filter.familySlug ?? ""} className={input}>
-              <option value="">All families</option>
-              {families.map((f) => <option key={f.slug} value={f.slug}>{f.name}</option>)}
-            </select>
-          </label>
+          <FamilySelect value={filter.familySlug} families={families} className={input} />
           <button type="submit" className={button}>Show</button>
         </form>
         <form method="get" action="/reports" aria-label="Custom period" className="flex flex-wrap items-end gap-2">

@@ -1,4 +1,5 @@
 import { RIDING_USES } from "@/db/schema";
+import { FamilySelect } from "@/components/reports/family-select";
 import { FOLLOW_UP_MONTHS, type SurvivalFilter } from "@/lib/survival/filter";
 
 /** Family, riding use and how far back repairs are taken, as a plain GET form: the page lives in its URL. */
@@ -7,13 +8,7 @@ export function SurvivalFilterBar({ filter, families }: { filter: SurvivalFilter
   const label = "flex flex-col gap-1 text-sm font-medium text-ink-soft";
   return (
     <form method="get" action="/reports/lasting" aria-label="Which repairs" className="flex flex-wrap items-end gap-3">
-      <label className={label}>
-        Motor family
-        <select name="family" defaultValue={filter.familySlug ?? ""} className={input}>
-          <option value="">All families</option>
-          {families.map((f) => <option key={f.slug} value={f.slug}>{f.name}</option>)}
-        </select>
-      </label>
+      <FamilySelect value={filter.familySlug} families={families} className={input} />
       <label className={label}>
         Riding use
         <select name="use" defaultValue={filter.ridingUse ?? ""} className={input}>
