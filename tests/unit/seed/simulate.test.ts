@@ -19,7 +19,7 @@ describe("the demo history simulator", () => {
     expect(again.length).toBe(sims.length);
     const digest = (list: SimCase[]) => JSON.stringify(list.map((s) => [s.reference, s.familySlug, s.serial, s.steps.map((st) => st.optionKey), s.outcome?.causes]));
     expect(digest(again)).toBe(digest(sims));
-  });
+  }, 90_000); // a second whole simulation: seconds alone, several times that beside the other test workers
 
   it("makes about the scenario's number of closed cases over its months, plus live ones in every status", () => {
     const past = sims.slice(0, content.scenario.closedCases);
