@@ -32,10 +32,7 @@ function moveFocus(e: React.KeyboardEvent<HTMLUListElement>, backTo: () => void)
   if (next < 0) backTo(); else links[next].focus();
 }
 
-/**
- * The result cards. Memoised: a keystroke first renders the page with the results of the query
- * before it (useDeferredValue), and those cards have not changed.
- */
+/** The result cards. Memoised: a re-render of the page that leaves the results as they were leaves the cards alone. */
 export const SearchResults = memo(function SearchResults({ hits, onLeaveTop }: { hits: WriteupHit[]; onLeaveTop: () => void }) {
   // Back to the first cards whenever the results change (state adjusted during rendering, as React advises).
   const [shown, setShown] = useState({ hits, count: FIRST_RESULTS });

@@ -1,12 +1,15 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { EmptyState } from "@/components/ui/empty-state";
 import type { SearchFilters } from "@/lib/search/types";
 import { indexedTerm, MIN_PREFIX } from "@/lib/search/writeup-index";
 import { SearchFilterPanel } from "./search-filters";
 import { focusFirstResult, SearchResults } from "./search-results";
 import { useWriteupIndex } from "./use-writeup-index";
+
+/** How long typing must pause before the address follows the query. */
+export const ADDRESS_AFTER_MS = 300;
 
 function searchUrl(query: string, filters: SearchFilters): string {
   const params = new URLSearchParams();
@@ -23,12 +26,19 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
   const [query, setQuery] = useState(initialQuery);
   const [filters, setFilters] = useState<SearchFilters>(initialFilters);
   const input = useRef<HTMLInputElement>(null);
-  const deferredQuery = useDeferredValue(query);
-  const hits = useMemo(() => (index ? index.search(deferredQuery, filters) : []), [index, deferredQuery, filters]);
+  // Found and painted with the keystroke itself: search and ten cards take a few milliseconds, and
+  // deferring them (useDeferredValue) cost a frame that painted only the typed letter first.
+  const hits = useMemo(() => (index ? index.search(query, filters) : []), [index, query, filters]);
   const facets = useMemo(() => index?.facets() ?? { families: [], causes: [], tags: [] }, [index]);
 
-  // The address names the results on screen, so it follows the query they were found for.
-  useEffect(() => { window.history.replaceState(null, "", searchUrl(deferredQuery, filters)); }, [deferredQuery, filters]);
+  // The address follows the query once typing pauses: each change of address also re-renders
+  // Next's router and has the browser fetch the page's icons again, which took about as long as
+  // the search itself on every keystroke.
+  useEffect(() => {
+    const url = searchUrl(query, filters);
+    const timer = window.setTimeout(() => window.history.replaceState(null, "", url), ADDRESS_AFTER_MS);
+    return () => window.clearTimeout(timer);
+  }, [query, filters]);
   const leaveResults = useCallback(() => input.current?.focus(), []);
 
   // ↓ moves into the result links (Tab reaches them too); Enter in the box opens the best match.
@@ -64,11 +74,11 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
         </div>
         <p className="text-sm text-ink-faint" aria-live="polite" data-testid="search-status">
           {error ? `The write-up index could not be loaded: ${error.message}` : loading && !index ? "Loading the write-up index…" :
-            index ? `${hits.length === 50 ? "50+" : hits.length} of ${index.size} write-ups${deferredQuery.trim() ? ` for “${deferredQuery.trim()}”` : filtered ? " with these filters" : ", newest first"} · ↓ to move into the list, Enter to open` : ""}
+            index ? `${hits.length === 50 ? "50+" : hits.length} of ${index.size} write-ups${query.trim() ? ` for “${query.trim()}”` : filtered ? " with these filters" : ", newest first"} · ↓ to move into the list, Enter to open` : ""}
         </p>
         {index && hits.length === 0 ? (
-          <EmptyState title={deferredQuery.trim() ? `No write-up matches “${deferredQuery.trim()}”.` : "No published write-up matches these filters."}>
-            {deferredQuery.trim().split(/\s+/).some((word) => word.length > 0 && (word.length < MIN_PREFIX || indexedTerm(word) === null))
+          <EmptyState title={query.trim() ? `No write-up matches “${query.trim()}”.` : "No published write-up matches these filters."}>
+            {query.trim().split(/\s+/).some((word) => word.length > 0 && (word.length < MIN_PREFIX || indexedTerm(word) === null))
               ? "Words of one or two letters match only whole words, and common ones such as “to” or “the” none: keep typing, or clear the filters."
               : "Try fewer words, another spelling, or clear the filters."}
           </EmptyState>

@@ -11,8 +11,12 @@
 //    applies to that. For information the same is measured at ten times the pace, 3 to 4.5 s of
 //    thought (BENCH_STRESS_THINK_MS): a stress figure, no budget.
 //  - search: each keystroke typed into the write-up search at BENCH_WRITEUPS (10,000) write-ups,
-//    until the results for what has been typed are painted.
+//    until the results for what has been typed are painted. Beside it, word by word in the same run,
+//    the floor: the same keys typed into a plain input added to the page, whose input event writes
+//    its value into the page (no React, no search).
+// BENCH_ONLY=search runs only the search measurement (the triage parts take several minutes).
 // Budgets on a 2-core machine: answer p95 ≤ 50 ms alone and ≤ 150 ms under load; search p95 ≤ 50 ms.
+import os from "node:os";
 import { eq } from "drizzle-orm";
 import { chromium, type Page } from "playwright-core";
 import { db, sql } from "@/db";
@@ -26,6 +30,8 @@ const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 40);
 const LOAD_WALKERS = Number(process.env.BENCH_LOAD_WALKERS ?? 50);
 const SHOP_THINK = parseThinkTime(process.env.BENCH_LOAD_THINK_MS, { min: 30_000, max: 45_000 });
 const STRESS_THINK = parseThinkTime(process.env.BENCH_STRESS_THINK_MS, { min: 3_000, max: 4_500 });
+const ONLY = process.env.BENCH_ONLY;
+if (ONLY !== undefined && ONLY !== "search") throw new Error(`BENCH_ONLY=${ONLY}: only "search" is known`);
 
 /**
  * Installed in the page: times from a key's keydown to the frame after `done()` first holds,
@@ -111,25 +117,45 @@ async function measureTriage(page: Page, samples: number) {
   return { answer, floor };
 }
 
-async function measureSearch(page: Page): Promise<number[]> {
+/**
+ * Types `word` key by key into the search box, or into the floor's plain input, each key timed until
+ * what has been typed is painted: the search's results for it, or the plain input's echo of it.
+ */
+async function typeTimed(page: Page, into: "search" | "plain", word: string, times: number[]) {
+  const input = page.locator(into === "search" ? "#writeup-search" : "#rb-plain");
+  await input.fill("");
+  if (into === "search") await page.getByTestId("search-status").filter({ hasText: "newest first" }).waitFor();
+  await input.focus();
+  for (let k = 1; k <= word.length; k++) {
+    const typed = word.slice(0, k);
+    await page.evaluate(([into, typed]) => (window as unknown as { __rbArm: Arm }).__rbArm(typed.at(-1)!, into === "search"
+      ? () => (document.querySelector("[data-testid=search-status]")?.textContent ?? "").includes(`for “${typed}”`)
+      : () => document.getElementById("rb-plain-echo")?.textContent === typed), [into, typed] as const);
+    await page.keyboard.press(typed.at(-1)!);
+    times.push((await pending(page)).total);
+    await page.waitForTimeout(60); // a typist's pace, roughly 150 ms a key with the measuring
+  }
+}
+
+async function measureSearch(page: Page): Promise<{ search: number[]; floor: number[] }> {
   await page.goto(`${BASE}/writeups`);
   await page.getByTestId("search-status").filter({ hasText: new RegExp(`of ${COUNT >= 1000 ? "\\d{4,}" : "\\d+"} write-ups`) }).waitFor({ timeout: 180_000 });
-  const input = page.locator("#writeup-search");
-  const times: number[] = [];
+  // The floor's plain input, outside React: its input event writes the value into the page.
+  await page.evaluate(() => {
+    const plain = document.createElement("input");
+    plain.id = "rb-plain";
+    const echo = document.createElement("output");
+    echo.id = "rb-plain-echo";
+    plain.addEventListener("input", () => { echo.textContent = plain.value; });
+    document.body.append(plain, echo);
+  });
+  const search: number[] = [];
+  const floor: number[] = [];
   for (const word of WORDS.slice(0, 12)) {
-    await input.fill("");
-    await page.getByTestId("search-status").filter({ hasText: "newest first" }).waitFor();
-    await input.focus();
-    for (let k = 1; k <= word.length; k++) {
-      const typed = word.slice(0, k);
-      await page.evaluate((typed) => (window as unknown as { __rbArm: Arm }).__rbArm(typed.at(-1)!,
-        () => (document.querySelector("[data-testid=search-status]")?.textContent ?? "").includes(`for “${typed}”`)), typed);
-      await page.keyboard.press(typed.at(-1)!);
-      times.push((await pending(page)).total);
-      await page.waitForTimeout(60); // a typist's pace, roughly 150 ms a key with the measuring
-    }
+    await typeTimed(page, "search", word, search);
+    await typeTimed(page, "plain", word, floor);
   }
-  return times;
+  return { search, floor };
 }
 
 /** The triage measurement while LOAD_WALKERS technicians answer in the background with this think time. */
@@ -154,6 +180,33 @@ const row = (label: string, values: number[], budget?: number) => {
   return `${label.padEnd(44)}${quantile(values, 0.5).toFixed(1).padStart(8)}${p95.toFixed(1).padStart(9)}${String(values.length).padStart(6)}${verdict}`;
 };
 
+/** The triage measurements, alone and under load, and their table. */
+async function measureAllTriage(page: Page, caseId: number, techId: string) {
+  await page.goto(`${BASE}/triage/${caseId}`);
+  await page.locator(`[data-testid=trail-step][data-seq="${STEPS}"]`).waitFor();
+  await measureTriage(page, 5); // warm-up: the server's and the browser's first runs
+  const alone = await measureTriage(page, SAMPLES);
+
+  const shop = await measureUnderLoad(page, techId, SHOP_THINK);
+  const stress = await measureUnderLoad(page, techId, STRESS_THINK);
+
+  console.log(`\nperceived speed, Chromium against the production build; ${STEPS} answers recorded on a 300-node tree; ${SAMPLES} samples each`);
+  console.log(`${"".padEnd(44)}${"median".padStart(8)}${"p95".padStart(9)}${"n".padStart(6)}   (ms, keydown to the frame painted)`);
+  console.log(row("answer: ranking painted, screen's own", alone.answer.map((t) => t.optimistic ?? t.total)));
+  console.log(row("answer: server's ranking painted", alone.answer.map((t) => t.total), 50));
+  console.log(row("floor: no-op round trip, same session check", alone.floor.map((t) => t.total)));
+  const loadRows = (name: string, think: ThinkTime, run: typeof shop, budget?: number) => {
+    console.log(`${name}: ${LOAD_WALKERS} technicians each thinking ${seconds(think.min)}–${seconds(think.max)} s before an answer`);
+    console.log(row(`  screen's own`, run.answer.map((t) => t.optimistic ?? t.total)));
+    console.log(row(`  server's ranking painted`, run.answer.map((t) => t.total), budget));
+    console.log(row(`  floor`, run.floor.map((t) => t.total)));
+    console.log(`    background: ${run.background.ok} answers stored (${run.background.failed} failed ${JSON.stringify(run.background.errors)}), ` +
+      `median ${quantile(run.background.latenciesMs, 0.5).toFixed(1)} ms, p95 ${quantile(run.background.latenciesMs, 0.95).toFixed(1)} ms; steps missing ${run.audit.missing}`);
+  };
+  loadRows("under load, a shop", SHOP_THINK, shop, 150);
+  loadRows("stress, ten times a shop's pace (no budget)", STRESS_THINK, stress);
+}
+
 async function main() {
   if (!process.env.DATABASE_URL || process.env.DATABASE_URL.includes(":54329/")) {
     throw new Error("Set DATABASE_URL to a bench database (npm run bench perceived does); refusing to fill the app database.");
@@ -169,33 +222,15 @@ async function main() {
     await context.addCookies([{ name: "rb_session", value: token, url: BASE }]);
     await context.addInitScript({ content: PAGE_HELPERS });
     const page = await context.newPage();
-    await page.goto(`${BASE}/triage/${caseId}`);
-    await page.locator(`[data-testid=trail-step][data-seq="${STEPS}"]`).waitFor();
-    await measureTriage(page, 5); // warm-up: the server's and the browser's first runs
-    const alone = await measureTriage(page, SAMPLES);
-
-    const shop = await measureUnderLoad(page, tech.id, SHOP_THINK);
-    const stress = await measureUnderLoad(page, tech.id, STRESS_THINK);
+    if (ONLY !== "search") await measureAllTriage(page, caseId, tech.id);
 
     await generateWriteups();
     const search = await measureSearch(page);
-
-    console.log(`\nperceived speed, Chromium against the production build; ${STEPS} answers recorded on a 300-node tree; ${SAMPLES} samples each`);
+    const load = os.loadavg().map((l) => l.toFixed(2)).join(" ");
+    console.log(`\nwrite-up search, Chromium against the production build; load average ${load} (1, 5, 15 min)`);
     console.log(`${"".padEnd(44)}${"median".padStart(8)}${"p95".padStart(9)}${"n".padStart(6)}   (ms, keydown to the frame painted)`);
-    console.log(row("answer: ranking painted, screen's own", alone.answer.map((t) => t.optimistic ?? t.total)));
-    console.log(row("answer: server's ranking painted", alone.answer.map((t) => t.total), 50));
-    console.log(row("floor: no-op round trip, same session check", alone.floor.map((t) => t.total)));
-    const loadRows = (name: string, think: ThinkTime, run: typeof shop, budget?: number) => {
-      console.log(`${name}: ${LOAD_WALKERS} technicians each thinking ${seconds(think.min)}–${seconds(think.max)} s before an answer`);
-      console.log(row(`  screen's own`, run.answer.map((t) => t.optimistic ?? t.total)));
-      console.log(row(`  server's ranking painted`, run.answer.map((t) => t.total), budget));
-      console.log(row(`  floor`, run.floor.map((t) => t.total)));
-      console.log(`    background: ${run.background.ok} answers stored (${run.background.failed} failed ${JSON.stringify(run.background.errors)}), ` +
-        `median ${quantile(run.background.latenciesMs, 0.5).toFixed(1)} ms, p95 ${quantile(run.background.latenciesMs, 0.95).toFixed(1)} ms; steps missing ${run.audit.missing}`);
-    };
-    loadRows("under load, a shop", SHOP_THINK, shop, 150);
-    loadRows("stress, ten times a shop's pace (no budget)", STRESS_THINK, stress);
-    console.log(row(`search: keystroke to results painted (${COUNT} write-ups)`, search, 50));
+    console.log(row(`search: keystroke to results painted (${COUNT} write-ups)`, search.search, 50));
+    console.log(row("floor: keystroke into a plain input, echoed", search.floor));
   } finally {
     await browser.close();
     await removeGenerated();

@@ -36,6 +36,17 @@ describe("a trainee searches the write-ups and reads one", () => {
     await screenshot(browser.page, "writeups-search-typo");
   });
 
+  it("puts the query in the address once typing pauses, so a reload shows the same results", async () => {
+    const search = new WriteupSearchPage(browser.page);
+    await search.open();
+    await search.type("sprag clutch");
+    await browser.page.waitForURL(`${BASE_URL}/writeups?q=sprag+clutch`);
+    await browser.page.reload();
+    await search.ready();
+    expect(await search.input().inputValue()).toBe("sprag clutch");
+    expect(await search.status().innerText()).toContain("for “sprag clutch”");
+  });
+
   it("paints the first ten results and ten more on each request; one or two letters match whole words only", async () => {
     const search = new WriteupSearchPage(browser.page);
     await search.open();
