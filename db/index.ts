@@ -15,6 +15,8 @@ export const sql: Client =
     idle_timeout: 30,
     connect_timeout: 5,
     onnotice: () => {},
+    // JIT compiling costs tens of ms, more than it saves on report queries that run well under a second.
+    connection: { jit: "off" },
   });
 globalForDb.rootbenchSql = sql;
 
