@@ -42,9 +42,13 @@ function guardOf(column: string) {
 /** The upgrade slugs as an SQL array, in the order of `fittedCounts`. */
 const upgradeSlugs = pg.unsafe(`array[${UPGRADES.map((u) => `'${u.slug}'`).join(", ")}]`);
 
-/** For each upgrade in that order, how many of the grouped repairs had it fitted (from the case row's copy). */
-function fittedCounts(column: string) {
-  return pg.unsafe(`array[${UPGRADES.map((u) => `count(*) filter (where '${u.slug}' = any(${column}))`).join(", ")}]::int[]`);
+/**
+ * For each upgrade in that order, how many of the grouped repairs of the group it guards had it fitted
+ * (from the case row's copy); 0 in other groups. The group is tested first, so each repair's upgrades
+ * are only searched for the few upgrades that guard its group.
+ */
+function fittedCounts(upgrades: string, group: string) {
+  return pg.unsafe(`array[${UPGRADES.map((u) => `count(*) filter (where ${group} = '${u.guards}' and '${u.slug}' = any(${upgrades}))`).join(", ")}]::int[]`);
 }
 
 /**
@@ -85,7 +89,7 @@ export function followUpQuery(scope: FollowUpScope) {
              extract(day from case when r.next_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
                                    else greatest(r.next_at - r.closed_at, interval '0') end)::int as days,
              coalesce(r.next_at > r.closed_at and r.next_causes && g.group_ids, false) as event,
-             count(*)::int as n, ${fittedCounts("r.fitted_upgrades")} as fitted
+             count(*)::int as n, ${fittedCounts("r.fitted_upgrades", "g.grp")} as fitted
       from visits r join cause_groups g on g.id = r.primary_cause_id
       where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
         and r.closed_at < ${scope.to.toISOString()}::timestamptz ${use}
@@ -95,7 +99,7 @@ export function followUpQuery(scope: FollowUpScope) {
     union all
     select 'fitted', f.upgrade, t.days, t.event, f.n
     from tally t cross join unnest(${upgradeSlugs}, t.fitted) as f(upgrade, n)
-    where f.n > 0 and ${guardOf("f.upgrade")} = t.grp`;
+    where f.n > 0`;
 }
 
 export async function followUps(scope: FollowUpScope): Promise<FollowUpCount[]> {
