@@ -34,12 +34,7 @@ function groupOf(column: string) {
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
 }
 
-/** The cause group an upgrade guards, in SQL (the slugs are our own fixed list, so inlining them is safe). */
-function guardOf(column: string) {
-  return pg.unsafe(`(case ${column} ${UPGRADES.map((u) => `when '${u.slug}' then '${u.guards}'`).join(" ")} end)`);
-}
-
-/** The upgrade slugs as an SQL array, in the order of `fittedCounts`. */
+/** The upgrade slugs as an SQL array, in the order of `fittedCounts` (our own fixed list, so inlining them is safe). */
 const upgradeSlugs = pg.unsafe(`array[${UPGRADES.map((u) => `'${u.slug}'`).join(", ")}]`);
 
 /**
@@ -76,7 +71,7 @@ export function followUpQuery(scope: FollowUpScope) {
       from (select id, ${groupOf("area")} as grp from causes) g
     ),
     visits as (
-      select c.id, c.status, c.closed_at, c.riding_use, c.primary_cause_id, c.fitted_upgrades,
+      select c.status, c.closed_at, c.riding_use, c.primary_cause_id, c.fitted_upgrades,
              lead(c.created_at) over w as next_at, lead(c.confirmed_cause_ids) over w as next_causes
       from cases c
       where c.serial <> '' ${visitFamily}
