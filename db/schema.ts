@@ -366,12 +366,17 @@ export const cases = pgTable(
     whatToSend: text("what_to_send").notNull().default(""),
     repeatOfCaseId: integer("repeat_of_case_id"),
     /**
-     * Copies of this case's own bench outcome (outcome_causes), written with it by `storeConfirmedCauses`:
-     * the primary confirmed cause and every confirmed cause, so return-free follow-up reads a unit's
-     * visits from one index. No foreign key: outcome_causes holds that.
+     * Copies of this case's own bench outcome, written with it by `storeOutcomeCopies`: the primary
+     * confirmed cause and every confirmed cause (outcome_causes) and the upgrades fitted
+     * (outcome_upgrades), so return-free follow-up reads a unit's visits from one index; the parts
+     * replaced (outcome_parts, ids and quantities in the same order), so parts demand sums them from
+     * the case rows without a join. No foreign keys: the outcome tables hold those.
      */
     primaryCauseId: integer("primary_cause_id"),
     confirmedCauseIds: integer("confirmed_cause_ids").array().notNull().default(sql`'{}'::integer[]`),
+    fittedUpgrades: text("fitted_upgrades").array().$type<UpgradeKind[]>().notNull().default(sql`'{}'::text[]`),
+    partIds: integer("part_ids").array().notNull().default(sql`'{}'::integer[]`),
+    partQuantities: integer("part_quantities").array().notNull().default(sql`'{}'::integer[]`),
     createdAt: createdAt(),
     updatedAt: ts("updated_at").notNull().defaultNow(),
     triagedAt: ts("triaged_at"),
@@ -388,7 +393,7 @@ export const cases = pgTable(
     index("cases_version_idx").on(t.treeVersionId),
     // A unit's visits in order, with what return-free follow-up reads, so it never sorts the whole table.
     index("cases_visits_idx")
-      .on(t.familyId, t.serial, t.createdAt, t.id, t.status, t.closedAt, t.ridingUse, t.primaryCauseId, t.confirmedCauseIds)
+      .on(t.familyId, t.serial, t.createdAt, t.id, t.status, t.closedAt, t.ridingUse, t.primaryCauseId, t.confirmedCauseIds, t.fittedUpgrades)
       .where(sql`${t.serial} <> ''`),
     check("cases_status_check", sql`${t.status} in (${inList(CASE_STATUSES)})`),
     check("cases_caller_kind_check", sql`${t.callerKind} in (${inList(CALLER_KINDS)})`),

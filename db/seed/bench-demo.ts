@@ -5,7 +5,7 @@ import { z } from "zod";
 import type { Tx } from "@/db";
 import { caseEvents, cases, causeLocations, outcomeCauses, RIDING_USES, CALLER_KINDS } from "@/db/schema";
 import { slugSchema } from "@/lib/trees/file/schema";
-import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { Random } from "@/lib/random";
 
 const benchDemoSchema = z.strictObject({
@@ -61,7 +61,7 @@ export async function seedCompanions(tx: Tx, demo: BenchDemo, ids: Ids): Promise
     if (picked.length === 0) continue;
     const inserted = await tx.insert(outcomeCauses).values(picked.map((r) => ({ caseId: r.caseId, causeId: companion, primary: false })))
       .onConflictDoNothing().returning({ caseId: outcomeCauses.caseId });
-    await storeConfirmedCauses(tx, inserted.map((r) => r.caseId));
+    await storeOutcomeCopies(tx, inserted.map((r) => r.caseId));
     added += inserted.length;
   }
   return added;

@@ -4,7 +4,7 @@ import { db, type Tx } from "@/db";
 import { caseEvents, caseOutcomes, cases, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, pgErrorCode } from "@/lib/errors";
-import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { REPEAT_WINDOW_DAYS } from "@/lib/outcomes/repeat";
 import { fileDigest } from "./import-token";
 import { readCsv } from "./lines";
@@ -91,9 +91,9 @@ export async function insertImportedRows(tx: Tx, rows: ImportRow[], user: Sessio
   for (const group of chunks(withIds, 1000)) {
     await tx.insert(caseOutcomes).values(group.map(({ r, id }) => ({ caseId: id, labourMinutes: r.labourMinutes, notes: r.notes, recordedBy: user.id, recordedAt: now })));
     await tx.insert(outcomeCauses).values(group.map(({ r, id }) => ({ caseId: id, causeId: r.causeId, primary: true })));
-    await storeConfirmedCauses(tx, group.map(({ id }) => id));
     const partRows = group.flatMap(({ r, id }) => r.parts.map((p) => ({ caseId: id, ...p })));
     if (partRows.length) await tx.insert(outcomeParts).values(partRows);
+    await storeOutcomeCopies(tx, group.map(({ id }) => id));
     await tx.insert(caseEvents).values(group.map(({ r, id }) => ({
       caseId: id, kind: IMPORTED_EVENT, toStatus: "closed", byUserId: user.id, note: `Imported from ${fileName.slice(0, 120)}, line ${r.line}`, at: now,
     })));

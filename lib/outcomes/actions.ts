@@ -6,7 +6,7 @@ import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
 import { relearn } from "@/lib/review/learned";
-import { storeConfirmedCauses } from "./confirmed-causes";
+import { storeOutcomeCopies } from "./outcome-copies";
 import { caseOnlyInput, outcomeFormInput, OTHER_PRIMARY, reopenInput } from "./input";
 import { refreshRepeatLink } from "./repeat";
 import { lockCase, moveStatus, outcomeLockedReason } from "./status";
@@ -54,12 +54,12 @@ export const saveOutcomeAction = defineAction({
           caseId: c.id, causeId, primary: input.primary !== OTHER_PRIMARY && input.primary === causeId,
         })));
       }
-      await storeConfirmedCauses(tx, [c.id]);
-      await storeTriageScores(tx, [c.id]);
       await tx.delete(outcomeUpgrades).where(eq(outcomeUpgrades.caseId, c.id));
       if (input.upgradeKinds.length) await tx.insert(outcomeUpgrades).values(input.upgradeKinds.map((upgrade) => ({ caseId: c.id, upgrade })));
       await tx.delete(outcomeParts).where(eq(outcomeParts.caseId, c.id));
       if (input.parts.length) await tx.insert(outcomeParts).values(input.parts.map((p) => ({ caseId: c.id, ...p })));
+      await storeOutcomeCopies(tx, [c.id]);
+      await storeTriageScores(tx, [c.id]);
       if (input.detachPhotoIds.length) {
         await tx.update(uploads).set({ caseId: null }).where(and(eq(uploads.caseId, c.id), inArray(uploads.id, input.detachPhotoIds)));
       }

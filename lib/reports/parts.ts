@@ -19,14 +19,17 @@ export interface PartsDemand {
 }
 
 export function partsDemandQuery(scope: ReportScope) {
-  // Grouped on the truncated timestamp and the part id first; names and month labels join the few result rows.
+  // The case rows carry a copy of their parts replaced (part_ids, part_quantities, in one order), so the
+  // cases in scope are read from cases_closed_parts_idx alone. Grouped on the truncated timestamp and
+  // the part id first; names and month labels join the few result rows.
   return pg<{ month: string; slug: string; name: string; sku: string; qty: number }[]>`
-    with per_month as (
-      select date_trunc('month', c.closed_at at time zone 'UTC') as m, op.part_id, sum(op.quantity)::int as qty
+    with used as (
+      select date_trunc('month', c.closed_at at time zone 'UTC') as m, unnest(c.part_ids) as part_id, unnest(c.part_quantities) as quantity
       from cases c
-      join outcome_parts op on op.case_id = c.id
       where ${inScope(scope)}
-      group by 1, 2
+    ),
+    per_month as (
+      select m, part_id, sum(quantity)::int as qty from used group by 1, 2
     )
     select to_char(pm.m, 'YYYY-MM') as month, p.slug, p.name, p.sku, pm.qty
     from per_month pm join parts p on p.id = pm.part_id`;

@@ -34,9 +34,16 @@ function groupOf(column: string) {
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
 }
 
-/** The cause group an upgrade guards, in SQL (the slugs are our own fixed list, so inlining them is safe). */
-function guardOf(column: string) {
-  return pg.unsafe(`(case ${column} ${UPGRADES.map((u) => `when '${u.slug}' then '${u.guards}'`).join(" ")} end)`);
+/** The upgrade slugs as an SQL array, in the order of `fittedCounts` (our own fixed list, so inlining them is safe). */
+const upgradeSlugs = pg.unsafe(`array[${UPGRADES.map((u) => `'${u.slug}'`).join(", ")}]`);
+
+/**
+ * For each upgrade in that order, how many of the grouped repairs of the group it guards had it fitted
+ * (from the case row's copy); 0 in other groups. The group is tested first, so each repair's upgrades
+ * are only searched for the few upgrades that guard its group.
+ */
+function fittedCounts(upgrades: string, group: string) {
+  return pg.unsafe(`array[${UPGRADES.map((u) => `count(*) filter (where ${group} = '${u.guards}' and '${u.slug}' = any(${upgrades}))`).join(", ")}]::int[]`);
 }
 
 /**
@@ -54,39 +61,40 @@ function guardOf(column: string) {
 export function followUpQuery(scope: FollowUpScope) {
   const use = scope.ridingUse === null ? pg`` : pg`and r.riding_use = ${scope.ridingUse}`;
   const visitFamily = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
-  // The case rows carry copies of their confirmed causes (primary_cause_id, confirmed_cause_ids), so
-  // the visits are read from cases_visits_idx alone; each cause's group still comes from the catalogue.
+  // The case rows carry copies of their confirmed causes and upgrades fitted (primary_cause_id,
+  // confirmed_cause_ids, fitted_upgrades), so the visits are read from cases_visits_idx alone; each
+  // cause's group still comes from the catalogue. One pass counts the repairs by group, days and
+  // event, with how many had each upgrade fitted; an upgrade's counts are those of the group it guards.
   return pg<FollowUpCount[]>`
     with cause_groups as materialized (
       select id, grp, array_agg(id) over (partition by grp) as group_ids
       from (select id, ${groupOf("area")} as grp from causes) g
     ),
     visits as (
-      select c.id, c.status, c.closed_at, c.riding_use, c.primary_cause_id,
+      select c.status, c.closed_at, c.riding_use, c.primary_cause_id, c.fitted_upgrades,
              lead(c.created_at) over w as next_at, lead(c.confirmed_cause_ids) over w as next_causes
       from cases c
       where c.serial <> '' ${visitFamily}
       window w as (partition by c.family_id, c.serial order by c.created_at, c.id)
     ),
-    ended as materialized (
-      select r.id, g.grp,
+    tally as (
+      select g.grp,
              -- A difference of two timestamptz is whole days plus under 24 hours, so its day field is the
              -- whole days elapsed (and cheaper than dividing its epoch in numeric).
              extract(day from case when r.next_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
                                    else greatest(r.next_at - r.closed_at, interval '0') end)::int as days,
-             coalesce(r.next_at > r.closed_at and r.next_causes && g.group_ids, false) as event
+             coalesce(r.next_at > r.closed_at and r.next_causes && g.group_ids, false) as event,
+             count(*)::int as n, ${fittedCounts("r.fitted_upgrades", "g.grp")} as fitted
       from visits r join cause_groups g on g.id = r.primary_cause_id
       where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
         and r.closed_at < ${scope.to.toISOString()}::timestamptz ${use}
+      group by 1, 2, 3
     )
-    select 'group' as kind, grp as key, days, event, count(*)::int as n from ended group by grp, days, event
+    select 'group' as kind, grp as key, days, event, n from tally
     union all
-    -- The guard is tested inside the count, not in a join condition the planner cannot estimate (it
-    -- then expects a few rows and sorts tens of thousands on disk instead of hashing them).
-    select 'fitted', u.upgrade, r.days, r.event, count(*) filter (where ${guardOf("u.upgrade")} = r.grp)::int
-    from ended r join outcome_upgrades u on u.case_id = r.id
-    group by u.upgrade, r.days, r.event
-    having count(*) filter (where ${guardOf("u.upgrade")} = r.grp) > 0`;
+    select 'fitted', f.upgrade, t.days, t.event, f.n
+    from tally t cross join unnest(${upgradeSlugs}, t.fitted) as f(upgrade, n)
+    where f.n > 0`;
 }
 
 export async function followUps(scope: FollowUpScope): Promise<FollowUpCount[]> {

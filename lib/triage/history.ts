@@ -5,7 +5,7 @@ import { sql } from "@/db";
  * Confirmed bench outcomes for a motor family, by cause slug: the counts n_k that move the
  * priors, over its closed cases (those closed before `closedBefore` when given). Read on every
  * answer, so it reads the copy of each case's confirmed causes on its row (`confirmed_cause_ids`,
- * kept equal to outcome_causes by `storeConfirmedCauses`) from cases_family_history_idx alone.
+ * kept equal to outcome_causes by `storeOutcomeCopies`) from cases_family_history_idx alone.
  */
 export async function familyHistory(familyId: number, closedBefore?: Date): Promise<Record<string, number>> {
   const before = closedBefore?.toISOString() ?? null;

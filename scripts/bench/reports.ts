@@ -48,11 +48,13 @@ async function generate(): Promise<{ added: number; ms: number }> {
     await tx`
       insert into cases (id, reference, status, caller_name, caller_kind, phone, email, family_id, serial, riding_use, symptom,
         tree_version_id, technician_id, notes, final_ranking, quote_low_cents, quote_high_cents, bench_plan, what_to_send,
-        repeat_of_case_id, primary_cause_id, confirmed_cause_ids, created_at, updated_at, triaged_at, closed_at)
+        repeat_of_case_id, primary_cause_id, confirmed_cause_ids, fitted_upgrades, part_ids, part_quantities,
+        created_at, updated_at, triaged_at, closed_at)
       select m.new_id, 'BN-' || m.new_id, 'closed', c.caller_name, c.caller_kind, c.phone, c.email, c.family_id,
         case when c.serial = '' then '' else c.serial || '-' || (m.g / (select count(*) from bench_src)) end, c.riding_use, c.symptom,
         c.tree_version_id, c.technician_id, c.notes, c.final_ranking, c.quote_low_cents, c.quote_high_cents, c.bench_plan, c.what_to_send,
         case when c.repeat_of_case_id is not null then c.id end, c.primary_cause_id, c.confirmed_cause_ids,
+        c.fitted_upgrades, c.part_ids, c.part_quantities,
         m.closed_at - (c.closed_at - c.created_at), m.closed_at, m.closed_at - (c.closed_at - c.triaged_at), m.closed_at
       from bench_map m join cases c on c.id = m.old_id`;
     // The steps' stored rankings are not read by any report; '{}' keeps the table to the size that matters.

@@ -1,7 +1,7 @@
 import { eq, sql } from "drizzle-orm";
 import type { Tx } from "@/db";
 import { caseEvents, caseOutcomes, cases, caseSteps, outcomeCauses, outcomeParts, outcomeUpgrades } from "@/db/schema";
-import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import type { SimCase } from "./simulate";
@@ -71,7 +71,7 @@ export async function insertHistory(tx: Tx, sims: SimCase[], ids: HistoryIds): P
     if (partRows.length) await tx.insert(outcomeParts).values(partRows);
     const upgradeRows = batch.flatMap(({ s, id }) => s.outcome!.upgradeKinds.map((upgrade) => ({ caseId: id, upgrade })));
     if (upgradeRows.length) await tx.insert(outcomeUpgrades).values(upgradeRows);
-    await storeConfirmedCauses(tx, batch.map(({ id }) => id));
+    await storeOutcomeCopies(tx, batch.map(({ id }) => id));
     await storeTriageScores(tx, batch.map(({ id }) => id));
   }
 

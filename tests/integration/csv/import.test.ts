@@ -10,6 +10,7 @@ import { treeAccuracy } from "@/lib/reports/accuracy";
 import { parseReportFilter } from "@/lib/reports/period";
 import { resolveScope } from "@/lib/reports/scope";
 import { countRows, createRoleUsers } from "../../support/db";
+import { casesDisagreeingWithOutcome } from "../../support/outcome-copies";
 import { params, request } from "../../support/requests";
 import { resetToDemo } from "../../support/seed";
 
@@ -92,6 +93,12 @@ describe("importing past repair records from CSV", () => {
     expect(parts.map((p) => p.quantity).sort()).toEqual([1]);
     const [primary] = await db.select().from(outcomeCauses).where(eq(outcomeCauses.caseId, row.id));
     expect(primary.primary).toBe(true);
+    // The case rows carry copies of their causes and parts, as the bench form writes them.
+    expect(row.primaryCauseId).toBe(primary.causeId);
+    expect(row).toMatchObject({ partIds: [parts[0].partId], partQuantities: [1], fittedUpgrades: [] });
+    const [twoParts] = await db.select().from(cases).where(eq(cases.reference, "OLD-1000"));
+    expect(twoParts.partQuantities.sort()).toEqual([1, 2]);
+    expect(await casesDisagreeingWithOutcome()).toEqual([]);
   });
 
   it("imported records count in the Pareto but not in tree accuracy (no triage on a tree)", async () => {

@@ -1,7 +1,7 @@
 import { asc, eq } from "drizzle-orm";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, treeVersions } from "@/db/schema";
-import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
 import { rankingAfter, type DxSettings } from "@/lib/diagnosis";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
 import type { TreeGraph } from "@/lib/trees/graph-types";
 import { db } from "../../support/db";
@@ -65,7 +65,7 @@ export async function insertCase(graph: TreeGraph, walk: ReturnType<typeof walkO
     await db.insert(caseOutcomes).values({ caseId: row.id, labourMinutes: 95, upgrades: "Uprated clutch", notes: "Cage cracked on two pockets." });
     await db.insert(outcomeCauses).values({ caseId: row.id, causeId: cause.id });
     await db.insert(outcomeParts).values({ caseId: row.id, partId: part.id, quantity: 1 });
-    await db.transaction((tx) => storeConfirmedCauses(tx, [row.id]));
+    await db.transaction((tx) => storeOutcomeCopies(tx, [row.id]));
   }
   return row.id;
 }

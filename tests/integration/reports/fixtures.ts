@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions, type CaseStatus } from "@/db/schema";
-import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
 import { relearn } from "@/lib/review/learned";
 import { loadGraph } from "@/lib/trees/graph";
@@ -105,13 +105,13 @@ export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<numb
         ...(s.secondary ?? []).map((slug) => ({ caseId: id, causeId: ids.cause(slug), primary: false })),
       ]);
       if (causeRows.length) await db.insert(outcomeCauses).values(causeRows);
-      await db.transaction(async (tx) => {
-        await storeConfirmedCauses(tx, withOutcome.map(({ id }) => id));
-        await storeTriageScores(tx, withOutcome.map(({ id }) => id));
-      });
     }
     const partRows = group.flatMap((s, i) => (s.parts ?? []).map((p) => ({ caseId: caseIds[i], partId: ids.part(p.slug), quantity: p.quantity })));
     if (partRows.length) await db.insert(outcomeParts).values(partRows);
+    await db.transaction(async (tx) => {
+      await storeOutcomeCopies(tx, caseIds);
+      await storeTriageScores(tx, withOutcome.map(({ id }) => id));
+    });
     const stepRows = group.flatMap((s, i) => {
       if (s.steps === false) return [];
       const v = ids.version(s.tree);

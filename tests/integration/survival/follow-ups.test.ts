@@ -7,6 +7,7 @@ import { listCases } from "@/lib/cases/list";
 import { caseListQuery } from "@/lib/cases/list-query";
 import { kaplanMeierOfTally, logRank } from "@/lib/diagnosis";
 import { reopenCaseAction, saveOutcomeAction, startBenchAction } from "@/lib/outcomes/actions";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { upgradeAdviceFor } from "@/lib/survival/advice-query";
 import { compareUpgrades, tallyOf } from "@/lib/survival/compare";
 import { followUps, type FollowUpCount } from "@/lib/survival/follow-ups";
@@ -18,7 +19,11 @@ import { day, demoIds, insertCases, type DemoIds } from "../reports/fixtures";
 
 const AS_OF = new Date("2026-06-30T00:00:00Z");
 const scope = (familyId: number) => ({ from: new Date("2025-01-01T00:00:00Z"), to: AS_OF, familyId, ridingUse: null, asOf: AS_OF });
-const fit = (caseId: number, upgrade: UpgradeKind) => db.insert(outcomeUpgrades).values({ caseId, upgrade });
+// Written as every writer of an outcome does: the upgrade row, then the case row's copy of it.
+const fit = (caseId: number, upgrade: UpgradeKind) => db.transaction(async (tx) => {
+  await tx.insert(outcomeUpgrades).values({ caseId, upgrade });
+  await storeOutcomeCopies(tx, [caseId]);
+});
 const sorted = (rows: FollowUpCount[]) => [...rows].sort((a, b) => a.kind.localeCompare(b.kind) || a.key.localeCompare(b.key) || a.days - b.days);
 
 describe("return-free follow-up on a small hand-made history", () => {

@@ -6,7 +6,7 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { answerStepAction } from "@/lib/triage/answer";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import { undoStepAction } from "@/lib/triage/undo";
-import { storeConfirmedCauses } from "@/lib/outcomes/confirmed-causes";
+import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { storedLikelihoods } from "@/lib/review/learned";
 import { rankNextQuestions, scoreCauses, suggestConclusion, type DxAnswer } from "@/lib/diagnosis";
 import { loadGraph, toDxTree } from "@/lib/trees/graph";
@@ -52,7 +52,7 @@ describe("walking a case through a seeded tree", () => {
       { caseId: closed[0], causeId: belt, primary: false }, { caseId: closed[1], causeId: belt, primary: false },
       { caseId: other, causeId: belt },
     ]);
-    await db.transaction((tx) => storeConfirmedCauses(tx, [...closed, other]));
+    await db.transaction((tx) => storeOutcomeCopies(tx, [...closed, other]));
   });
 
   let caseId: number;
