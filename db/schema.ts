@@ -387,7 +387,7 @@ export const cases = pgTable(
     index("cases_status_created_idx").on(t.status, t.createdAt),
     index("cases_family_closed_idx").on(t.familyId, t.closedAt),
     // A family's confirmed history, which every triage answer reads (lib/triage/history.ts).
-    index("cases_family_history_idx").on(t.familyId, t.closedAt, t.confirmedCauseIds).where(sql`${t.status} = 'closed'`),
+    index("cases_family_history_idx").on(t.familyId, t.confirmedCauseIds).where(sql`${t.status} = 'closed'`),
     index("cases_technician_idx").on(t.technicianId),
     index("cases_serial_idx").on(t.serial),
     index("cases_version_idx").on(t.treeVersionId),

@@ -1,1 +1,1 @@
-CREATE INDEX "cases_family_history_idx" ON "cases" USING btree ("family_id","closed_at","confirmed_cause_ids") WHERE "cases"."status" = 'closed';
+CREATE INDEX "cases_family_history_idx" ON "cases" USING btree ("family_id","confirmed_cause_ids") WHERE "cases"."status" = 'closed';

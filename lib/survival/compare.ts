@@ -48,25 +48,37 @@ export interface UpgradeComparison {
 
 /** Follow-ups counted by day, as the engine takes them. */
 export function tallyOf(rows: { days: number; event: boolean; n: number }[]): SurvivalTally[] {
-  return rows.map((r) => ({ time: r.days, events: r.event ? r.n : 0, censored: r.event ? 0 : r.n }));
+  return rows.map(tallyRow);
+}
+
+function tallyRow(r: { days: number; event: boolean; n: number }): SurvivalTally {
+  return { time: r.days, events: r.event ? r.n : 0, censored: r.event ? 0 : r.n };
+}
+
+/** The follow-up rows of each kind and key ("group:clutch", "fitted:uprated-clutch"), as tallies, in one pass. */
+export function talliesByKey(rows: FollowUpCount[]): Map<string, SurvivalTally[]> {
+  const out = new Map<string, SurvivalTally[]>();
+  for (const r of rows) {
+    const key = `${r.kind}:${r.key}`;
+    let list = out.get(key);
+    if (!list) out.set(key, (list = []));
+    list.push(tallyRow(r));
+  }
+  return out;
 }
 
 /** `all` minus `part`, day by day: the repairs of a group that did not have an upgrade fitted. */
 export function without(all: SurvivalTally[], part: SurvivalTally[]): SurvivalTally[] {
-  const key = (t: number, e: boolean) => `${t}:${e}`;
-  const left = new Map<string, number>();
-  for (const r of all) {
-    left.set(key(r.time, true), (left.get(key(r.time, true)) ?? 0) + r.events);
-    left.set(key(r.time, false), (left.get(key(r.time, false)) ?? 0) + r.censored);
-  }
-  for (const r of part) {
-    left.set(key(r.time, true), (left.get(key(r.time, true)) ?? 0) - r.events);
-    left.set(key(r.time, false), (left.get(key(r.time, false)) ?? 0) - r.censored);
-  }
-  return [...left].filter(([, n]) => n > 0).map(([k, n]) => {
-    const [time, event] = k.split(":");
-    return { time: Number(time), events: event === "true" ? n : 0, censored: event === "true" ? 0 : n };
-  });
+  const left = new Map<number, { events: number; censored: number }>();
+  const add = (r: SurvivalTally, sign: number) => {
+    const day = left.get(r.time) ?? { events: 0, censored: 0 };
+    day.events += sign * r.events;
+    day.censored += sign * r.censored;
+    left.set(r.time, day);
+  };
+  for (const r of all) add(r, 1);
+  for (const r of part) add(r, -1);
+  return [...left].filter(([, d]) => d.events > 0 || d.censored > 0).map(([time, d]) => ({ time, events: d.events, censored: d.censored }));
 }
 
 /** S(t) of a step function: the last step at or before t, 1 before the first. */
@@ -132,9 +144,10 @@ export function verdictFor(upgrade: Upgrade, fitted: Arm, notFitted: Arm, pValue
 
 /** Fitted vs not fitted, for every upgrade, among the repairs of the cause group it guards. */
 export function compareUpgrades(rows: FollowUpCount[]): UpgradeComparison[] {
+  const tallies = talliesByKey(rows);
   return UPGRADES.map((upgrade) => {
-    const withIt = tallyOf(rows.filter((r) => r.kind === "fitted" && r.key === upgrade.slug));
-    const withoutIt = without(tallyOf(rows.filter((r) => r.kind === "group" && r.key === upgrade.guards)), withIt);
+    const withIt = tallies.get(`fitted:${upgrade.slug}`) ?? [];
+    const withoutIt = without(tallies.get(`group:${upgrade.guards}`) ?? [], withIt);
     const fitted = arm(withIt);
     const notFitted = arm(withoutIt);
     const pValue = fitted.n > 0 && notFitted.n > 0 && fitted.returns + notFitted.returns > 0 ? logRankOfTally(withIt, withoutIt).pValue : null;

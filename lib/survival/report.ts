@@ -2,7 +2,7 @@ import "server-only";
 import { kaplanMeierOfTally } from "@/lib/diagnosis";
 import { monthsBefore } from "@/lib/reports/period";
 import { sql as pg } from "@/db";
-import { compareUpgrades, DAYS_PER_MONTH, survivalAt, tallyOf, type UpgradeComparison } from "./compare";
+import { compareUpgrades, DAYS_PER_MONTH, survivalAt, talliesByKey, type UpgradeComparison } from "./compare";
 import type { SurvivalFilter } from "./filter";
 import { followUps, type FollowUpCount, type FollowUpScope } from "./follow-ups";
 import { CAUSE_GROUPS, type CauseGroup } from "./groups";
@@ -43,13 +43,14 @@ export async function followUpScope(filter: SurvivalFilter, asOf = new Date()): 
 
 export function warrantyByGroup(rows: FollowUpCount[], warrantyMonths: number): GroupWarranty[] {
   const limit = warrantyMonths * DAYS_PER_MONTH;
+  const tallies = talliesByKey(rows);
   return CAUSE_GROUPS.map(({ slug }) => {
-    const inGroup = rows.filter((r) => r.kind === "group" && r.key === slug);
-    const steps = kaplanMeierOfTally(tallyOf(inGroup));
+    const inGroup = tallies.get(`group:${slug}`) ?? [];
+    const steps = kaplanMeierOfTally(inGroup);
     return {
       group: slug,
-      repairs: inGroup.reduce((a, r) => a + r.n, 0),
-      backInWarranty: inGroup.filter((r) => r.event && r.days <= limit).reduce((a, r) => a + r.n, 0),
+      repairs: inGroup.reduce((a, r) => a + r.events + r.censored, 0),
+      backInWarranty: inGroup.filter((r) => r.time <= limit).reduce((a, r) => a + r.events, 0),
       shareByWarrantyEnd: 1 - survivalAt(steps, limit).survival,
     };
   }).filter((g) => g.repairs > 0);
