@@ -6,24 +6,15 @@ import { parseReportFilter } from "@/lib/reports/period";
 import { resolveScope, type ReportScope } from "@/lib/reports/scope";
 import { resetToDemo } from "../../support/seed";
 import { day, demoIds, insertCases, type CaseSpec } from "./fixtures";
+import { prng } from "@/lib/random";
 
 const FAMILIES = ["orvanta-tessel-2", "pellacor-fennel-1"];
 const PARTS = ["owc-uprated", "owc-standard", "gear-grease", "crank-seal-double", "needle-bearing-crank", "crank-sleeve"];
 const STATUSES: CaseStatus[] = ["closed", "closed", "closed", "on_bench", "booked_in"];
 
-/** A small deterministic generator (mulberry32), so a failure can be replayed. */
-function random(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** Cases over 18 months with none, one or several parts each, some not closed. */
 function generatedCases(n: number): CaseSpec[] {
-  const next = random(7);
+  const next = prng(7);
   return Array.from({ length: n }, () => {
     const status = STATUSES[Math.floor(next() * STATUSES.length)];
     const closedAt = new Date(day("2024-07-01").getTime() + Math.floor(next() * 540) * 86_400_000);

@@ -13,24 +13,15 @@ import { resolveScope } from "@/lib/reports/scope";
 import { createRoleUsers } from "../../support/db";
 import { resetToDemo } from "../../support/seed";
 import { day, demoIds, insertCases, type CaseSpec, type DemoIds } from "./fixtures";
+import { prng } from "@/lib/random";
 
 const F = "orvanta-tessel-2";
 const TREES = ["pedal-slip", "weak-assist", "grinding-noise", "water-cutout"];
 const SLUGS = ["owc-cage-broken", "belt-worn", "torque-sensor-drift", "speed-sensor-gap", "firmware-outdated", "needle-bearing-water", "crank-seal-worn"];
 
-/** A small deterministic generator (mulberry32), so a failure can be replayed. */
-function random(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** Rankings with ties, zeros, an unlisted share or none, and primaries inside, outside or missing from them. */
 function generatedCases(n: number): { spec: CaseSpec; ranking: Record<string, number>; primary: string | null }[] {
-  const next = random(2026);
+  const next = prng(2026);
   return Array.from({ length: n }, (_, i) => {
     const ranking: Record<string, number> = {};
     for (const slug of SLUGS) if (next() < 0.5) ranking[slug] = Math.round(next() * 4) / 4; // quarters: ties and zeros

@@ -8,21 +8,12 @@ import { groupOfArea } from "@/lib/survival/groups";
 import { UPGRADES } from "@/lib/survival/upgrades";
 import { resetToDemo } from "../../support/seed";
 import { day, demoIds, insertCases, type CaseSpec } from "../reports/fixtures";
+import { prng } from "@/lib/random";
 
 const DAY_MS = 86_400_000;
 const F = "orvanta-tessel-2";
 const SLUGS = ["owc-cage-broken", "owc-rollers-worn", "crank-seal-worn", "needle-bearing-water", "belt-worn", "torque-sensor-drift", "firmware-outdated", "housing-cracked"];
 const STATUSES: CaseStatus[] = ["closed", "closed", "closed", "closed", "on_bench", "booked_in", "advised"];
-
-/** A small deterministic generator (mulberry32), so a failure can be replayed. */
-function random(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Units back often, for the same or another fault, with bookings that overlap, no outcome yet, or no serial. */
 function generatedHistory(n: number, next: () => number): { spec: CaseSpec; upgrades: UpgradeKind[] }[] {
@@ -91,7 +82,7 @@ describe("return-free follow-up against the rule worked out from the outcome tab
     await resetToDemo();
     const ids = await demoIds();
     family = ids.family(F);
-    const history = generatedHistory(700, random(2026));
+    const history = generatedHistory(700, prng(2026));
     const caseIds = await insertCases(ids, history.map((h) => h.spec));
     const upgradeRows = history.flatMap((h, i) => h.upgrades.map((upgrade) => ({ caseId: caseIds[i], upgrade })));
     await db.transaction(async (tx) => {
