@@ -19,8 +19,8 @@ export interface PartsDemand {
 }
 
 export function partsDemandQuery(scope: ReportScope) {
-  // The case rows carry a copy of their parts replaced (part_ids, part_quantities, in one order), so the
-  // cases in scope are read from cases_closed_parts_idx alone. Grouped on the truncated timestamp and
+  // The case rows carry a copy of their parts replaced (part_ids, part_quantities, in one order), so only
+  // the cases in scope are read, with no join to outcome_parts. Grouped on the truncated timestamp and
   // the part id first; names and month labels join the few result rows.
   return pg<{ month: string; slug: string; name: string; sku: string; qty: number }[]>`
     with used as (
