@@ -1,4 +1,4 @@
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { treeVersions } from "@/db/schema";
@@ -22,7 +22,7 @@ describe("saving a draft", () => {
   it("start a new draft copies the published version row for row", async () => {
     const { version, graph, tree } = await openDraft("pedal-slip", senior);
     expect(version.number).toBe(2);
-    const [published] = await db.select().from(treeVersions).where(eq(treeVersions.treeId, tree.id));
+    const [published] = await db.select().from(treeVersions).where(and(eq(treeVersions.treeId, tree.id), eq(treeVersions.state, "published")));
     expect(version.basedOnVersionId).toBe(published.id);
     expect(graph).toEqual(graphToDraft((await loadGraph(published.id))!));
   });
