@@ -32,7 +32,7 @@ export function QuestionCard({ node, options, disabled, jumped, onAnswer, onSkip
         {options.map((option, i) => (
           <button key={option.key} type="button" disabled={disabled} onClick={() => onAnswer(option)}
             data-testid="answer-option" data-option={option.key}
-            className={`flex min-h-16 items-center gap-3 rounded-lg border-2 px-4 py-3 text-left text-lg font-medium transition
+            className={`flex min-h-16 items-center gap-3 rounded-lg border-2 px-4 py-3 text-left text-lg font-medium
               disabled:opacity-60 ${option.dontKnow ? "border-dashed border-ink-faint bg-paper text-ink-soft hover:border-ink-soft" : "border-copper/60 bg-white hover:border-copper hover:bg-copper-light/40"}`}>
             <kbd className="flex h-8 w-8 shrink-0 items-center justify-center rounded-md bg-ink font-mono text-base text-paper">{i < 9 ? i + 1 : "·"}</kbd>
             <span>{option.label}</span>

@@ -14,7 +14,8 @@
 //    until the results for what has been typed are painted. Beside it, word by word in the same run,
 //    the floor: the same keys typed into a plain input added to the page, whose input event writes
 //    its value into the page (no React, no search).
-// BENCH_ONLY=search runs only the search measurement (the triage parts take several minutes).
+// BENCH_ONLY=search runs only the search measurement (the triage parts take several minutes);
+// BENCH_ONLY=answer only the triage measurement alone, without the load runs.
 // Budgets on a 2-core machine: answer p95 ≤ 50 ms alone and ≤ 150 ms under load; search p95 ≤ 50 ms.
 import os from "node:os";
 import { eq } from "drizzle-orm";
@@ -31,7 +32,7 @@ const LOAD_WALKERS = Number(process.env.BENCH_LOAD_WALKERS ?? 50);
 const SHOP_THINK = parseThinkTime(process.env.BENCH_LOAD_THINK_MS, { min: 30_000, max: 45_000 });
 const STRESS_THINK = parseThinkTime(process.env.BENCH_STRESS_THINK_MS, { min: 3_000, max: 4_500 });
 const ONLY = process.env.BENCH_ONLY;
-if (ONLY !== undefined && ONLY !== "search") throw new Error(`BENCH_ONLY=${ONLY}: only "search" is known`);
+if (ONLY !== undefined && ONLY !== "search" && ONLY !== "answer") throw new Error(`BENCH_ONLY=${ONLY}: only "search" and "answer" are known`);
 
 /**
  * Installed in the page: times from a key's keydown to the frame after `done()` first holds,
@@ -186,15 +187,18 @@ async function measureAllTriage(page: Page, caseId: number, techId: string) {
   await page.locator(`[data-testid=trail-step][data-seq="${STEPS}"]`).waitFor();
   await measureTriage(page, 5); // warm-up: the server's and the browser's first runs
   const alone = await measureTriage(page, SAMPLES);
+  const load = os.loadavg().map((l) => l.toFixed(2)).join(" ");
 
-  const shop = await measureUnderLoad(page, techId, SHOP_THINK);
-  const stress = await measureUnderLoad(page, techId, STRESS_THINK);
-
-  console.log(`\nperceived speed, Chromium against the production build; ${STEPS} answers recorded on a 300-node tree; ${SAMPLES} samples each`);
+  console.log(`\nperceived speed, Chromium against the production build; ${STEPS} answers recorded on a 300-node tree; ${SAMPLES} samples each; load average ${load}`);
   console.log(`${"".padEnd(44)}${"median".padStart(8)}${"p95".padStart(9)}${"n".padStart(6)}   (ms, keydown to the frame painted)`);
   console.log(row("answer: ranking painted, screen's own", alone.answer.map((t) => t.optimistic ?? t.total)));
   console.log(row("answer: server's ranking painted", alone.answer.map((t) => t.total), 50));
   console.log(row("floor: no-op round trip, same session check", alone.floor.map((t) => t.total)));
+  if (ONLY === "answer") return;
+
+  const shop = await measureUnderLoad(page, techId, SHOP_THINK);
+  const stress = await measureUnderLoad(page, techId, STRESS_THINK);
+
   const loadRows = (name: string, think: ThinkTime, run: typeof shop, budget?: number) => {
     console.log(`${name}: ${LOAD_WALKERS} technicians each thinking ${seconds(think.min)}–${seconds(think.max)} s before an answer`);
     console.log(row(`  screen's own`, run.answer.map((t) => t.optimistic ?? t.total)));
@@ -223,6 +227,7 @@ async function main() {
     await context.addInitScript({ content: PAGE_HELPERS });
     const page = await context.newPage();
     if (ONLY !== "search") await measureAllTriage(page, caseId, tech.id);
+    if (ONLY === "answer") return;
 
     await generateWriteups();
     const search = await measureSearch(page);
