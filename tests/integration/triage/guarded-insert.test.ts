@@ -7,6 +7,7 @@ import { loadCaseContext } from "@/lib/triage/context";
 import { DIAGNOSIS_SETTINGS_KEY } from "@/lib/triage/dx-settings";
 import { appendStep } from "@/lib/triage/step-writes";
 import { publishedTree } from "@/lib/triage/tree-cache";
+import { sql as pg } from "@/db";
 import { db } from "../../support/db";
 import { idsOf, pedalSlipCase } from "./helpers";
 
@@ -53,6 +54,29 @@ describe("the guarded step insert", () => {
     await answer("q-what", "Pedals spin forward");
     expect(await insertAfter(() => answer("q-onset", "Gradually"))).toBeNull();
     expect((await steps()).map((s) => s.seq)).toEqual([1, 2]);
+  });
+
+  it("waits for an undo that holds the case row, then sees its step gone and refuses", async () => {
+    await answer("q-what", "Pedals spin forward");
+    await answer("q-onset", "Suddenly");
+    let release!: () => void;
+    const released = new Promise<void>((resolve) => { release = resolve; });
+    let locked!: () => void;
+    const lockTaken = new Promise<void>((resolve) => { locked = resolve; });
+    // An undo as the undo action runs it: the case row first, then its last step, committed only later.
+    const undo = pg.begin(async (tx) => {
+      await tx`select id from cases where id = ${fx.caseId} for update`;
+      await tx`delete from case_steps where case_id = ${fx.caseId} and seq = 2`;
+      locked();
+      await released;
+    });
+    const stored = insertAfter(async () => {
+      await lockTaken;
+      setTimeout(release, 200); // the insert is waiting on the case row by then
+    });
+    await undo;
+    expect(await stored).toBeNull();
+    expect((await steps()).map((s) => s.seq)).toEqual([1]);
   });
 
   it("refuses it when the case was finished in between", async () => {
