@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { sql as pg } from "@/db";
 import { seed } from "@/db/seed";
-import { familyHistory } from "@/lib/triage/history";
+import { loadCaseContext } from "@/lib/triage/context";
 import { truncateAll } from "../../support/db";
 
 /** The counts straight from the bench outcomes, as the history is defined. */
@@ -15,42 +15,51 @@ async function fromOutcomes(familyId: number, closedBefore?: Date): Promise<Reco
   return Object.fromEntries(rows.map((r) => [r.slug, r.n]));
 }
 
-describe("a motor family's confirmed history", () => {
-  let families: { id: number; closed: number; middle: Date }[];
+const total = (history: Record<string, number> | undefined) => Object.values(history ?? {}).reduce((a, n) => a + n, 0);
+const historyOf = async (caseId: number, historyAsOfStart = false) => (await loadCaseContext(caseId, { historyAsOfStart }))!.settings.history;
+
+describe("a case's motor family history, read with the case", () => {
+  /** Per family: how many closed cases, and the case started nearest the middle of its closings. */
+  let families: { id: number; closed: number; caseId: number; startedAt: Date }[];
 
   beforeAll(async () => {
     // The simulated history: thousands of closed cases, some confirming two causes.
     await truncateAll();
     await seed({ force: true });
-    const rows = await pg<{ id: number; closed: number; middle_ms: number }[]>`
-      select family_id as id, count(*)::int as closed, (percentile_cont(0.5) within group (order by extract(epoch from closed_at)) * 1000)::float8 as middle_ms
-      from cases where status = 'closed' group by family_id order by family_id`;
-    families = rows.map((r) => ({ id: r.id, closed: r.closed, middle: new Date(r.middle_ms) }));
+    families = (await pg<{ id: number; closed: number; case_id: number; started_ms: number }[]>`
+      with middle as (
+        select family_id, count(*)::int as closed, percentile_cont(0.5) within group (order by extract(epoch from closed_at)) as mid
+        from cases where status = 'closed' group by family_id)
+      select m.family_id as id, m.closed, c.id as case_id, (extract(epoch from c.created_at) * 1000)::float8 as started_ms
+      from middle m cross join lateral (
+        select id, created_at from cases where family_id = m.family_id order by abs(extract(epoch from created_at) - m.mid) limit 1) c
+      order by m.family_id`).map((r) => ({ id: r.id, closed: r.closed, caseId: r.case_id, startedAt: new Date(r.started_ms) }));
   });
 
   it("counts every confirmed cause of the family's closed cases, as outcome_causes holds them", async () => {
     expect(families.length).toBeGreaterThan(1);
     for (const family of families) {
-      const history = await familyHistory(family.id);
-      expect(Object.values(history).reduce((a, n) => a + n, 0)).toBeGreaterThanOrEqual(family.closed);
+      const history = await historyOf(family.caseId);
+      expect(total(history)).toBeGreaterThanOrEqual(family.closed);
       expect(history).toEqual(await fromOutcomes(family.id));
     }
   });
 
-  it("counts only the cases closed before a given moment when asked", async () => {
+  it("counts only the cases closed before the case was started when asked (a practice replay)", async () => {
     for (const family of families) {
-      const earlier = await familyHistory(family.id, family.middle);
-      expect(earlier).toEqual(await fromOutcomes(family.id, family.middle));
-      expect(Object.values(earlier).reduce((a, n) => a + n, 0)).toBeLessThan(Object.values(await familyHistory(family.id)).reduce((a, n) => a + n, 0));
+      const earlier = await historyOf(family.caseId, true);
+      expect(earlier).toEqual(await fromOutcomes(family.id, family.startedAt));
+      expect(total(earlier)).toBeLessThan(total(await historyOf(family.caseId)));
     }
   });
 
   it("leaves out a case that is reopened", async () => {
     const [kase] = await pg<{ id: number; family_id: number }[]>`select id, family_id from cases where status = 'closed' and cardinality(confirmed_cause_ids) > 0 limit 1`;
-    const before = await familyHistory(kase.family_id);
+    const reader = families.find((f) => f.id === kase.family_id)!.caseId;
+    const before = await historyOf(reader);
     await pg`update cases set status = 'on_bench', closed_at = null where id = ${kase.id}`;
-    const after = await familyHistory(kase.family_id);
-    expect(Object.values(after).reduce((a, n) => a + n, 0)).toBeLessThan(Object.values(before).reduce((a, n) => a + n, 0));
+    const after = await historyOf(reader);
+    expect(total(after)).toBeLessThan(total(before));
     expect(after).toEqual(await fromOutcomes(kase.family_id));
   });
 });
