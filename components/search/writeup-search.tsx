@@ -1,5 +1,5 @@
 "use client";
-import { useRouter } from "next/navigation";
+import { useRouter, useSearchParams } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { EmptyState } from "@/components/ui/empty-state";
 import type { SearchFilters } from "@/lib/search/types";
@@ -19,12 +19,18 @@ function searchUrl(query: string, filters: SearchFilters): string {
   return qs ? `/writeups?${qs}` : "/writeups";
 }
 
-/** Search as you type over the published write-ups, with filters and arrow-key navigation. */
-export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: string; initialFilters: SearchFilters }) {
+const param = (params: URLSearchParams, name: string) => params.get(name)?.slice(0, 200) || undefined;
+
+/**
+ * Search as you type over the published write-ups, with filters and arrow-key navigation. It starts
+ * from the address (the query and filters it writes there), also when Back returns to it.
+ */
+export function WriteupSearch() {
   const router = useRouter();
+  const params = useSearchParams();
   const { index, error, loading } = useWriteupIndex();
-  const [query, setQuery] = useState(initialQuery);
-  const [filters, setFilters] = useState<SearchFilters>(initialFilters);
+  const [query, setQuery] = useState(() => param(params, "q") ?? "");
+  const [filters, setFilters] = useState<SearchFilters>(() => ({ family: param(params, "family"), cause: param(params, "cause"), tag: param(params, "tag") }));
   const input = useRef<HTMLInputElement>(null);
   // Found and painted with the keystroke itself: search and ten cards take a few milliseconds, and
   // deferring them (useDeferredValue) cost a frame that painted only the typed letter first.
@@ -34,11 +40,18 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
   // The address follows the query once typing pauses: each change of address also re-renders
   // Next's router and has the browser fetch the page's icons again, which took about as long as
   // the search itself on every keystroke.
+  const address = searchUrl(query, filters);
+  const addressTimer = useRef<number | undefined>(undefined);
   useEffect(() => {
-    const url = searchUrl(query, filters);
-    const timer = window.setTimeout(() => window.history.replaceState(null, "", url), ADDRESS_AFTER_MS);
-    return () => window.clearTimeout(timer);
-  }, [query, filters]);
+    addressTimer.current = window.setTimeout(() => window.history.replaceState(null, "", address), ADDRESS_AFTER_MS);
+    return () => window.clearTimeout(addressTimer.current);
+  }, [address]);
+  // Leaving for a result before the pause is over: the address is written first, so Back returns
+  // to what was typed (the capture phase runs before the link's own navigation).
+  const settleAddress = () => {
+    window.clearTimeout(addressTimer.current);
+    if (window.location.pathname + window.location.search !== address) window.history.replaceState(null, "", address);
+  };
   const leaveResults = useCallback(() => input.current?.focus(), []);
 
   // ↓ moves into the result links (Tab reaches them too); Enter in the box opens the best match.
@@ -46,7 +59,10 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
     if (e.key === "ArrowDown") { if (focusFirstResult()) e.preventDefault(); }
     else if (e.key === "Enter") {
       e.preventDefault();
-      if (hits[0]) router.push(`/writeups/${hits[0].doc.id}`);
+      if (hits[0]) {
+        settleAddress();
+        router.push(`/writeups/${hits[0].doc.id}`);
+      }
     } else if (e.key === "Escape") setQuery("");
   }
 
@@ -54,7 +70,7 @@ export function WriteupSearch({ initialQuery, initialFilters }: { initialQuery: 
   return (
     <div className="grid gap-6 md:grid-cols-[15rem_minmax(0,1fr)]">
       <aside className="md:pt-[4.5rem]"><SearchFilterPanel facets={facets} filters={filters} onChange={setFilters} /></aside>
-      <div className="flex min-w-0 flex-col gap-3">
+      <div className="flex min-w-0 flex-col gap-3" onClickCapture={(e) => { if ((e.target as Element).closest("a[href]")) settleAddress(); }}>
         <div className="flex flex-col gap-1">
           <label htmlFor="writeup-search" className="text-sm font-medium text-ink-soft">Search write-ups</label>
           <input

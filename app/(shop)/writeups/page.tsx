@@ -12,7 +12,6 @@ export default async function WriteupsPage({ searchParams }: { searchParams: Pro
   const user = await requireRole("writeup:read", "/writeups");
   const params = await searchParams;
   const drafts = mayReadDrafts(user.role) ? await listDrafts() : [];
-  const q = one(params.q) ?? "";
   return (
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -26,8 +25,8 @@ export default async function WriteupsPage({ searchParams }: { searchParams: Pro
           </Link>
         ) : null}
       </div>
-      <WriteupSearch key={`${q}|${one(params.family)}|${one(params.cause)}|${one(params.tag)}`} initialQuery={q}
-        initialFilters={{ family: one(params.family), cause: one(params.cause), tag: one(params.tag) }} />
+      {/* A new address from outside (the header's search box) starts the search afresh. */}
+      <WriteupSearch key={`${one(params.q) ?? ""}|${one(params.family)}|${one(params.cause)}|${one(params.tag)}`} />
       {mayReadDrafts(user.role) ? <DraftList drafts={drafts} userId={user.id} /> : null}
     </div>
   );

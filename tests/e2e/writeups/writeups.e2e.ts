@@ -47,6 +47,20 @@ describe("a trainee searches the write-ups and reads one", () => {
     expect(await search.status().innerText()).toContain("for “sprag clutch”");
   });
 
+  it("writes the address before leaving for a result opened within the pause, so Back returns to the query", async () => {
+    const search = new WriteupSearchPage(browser.page);
+    await search.open();
+    await search.type("seal");
+    const first = search.results().first().getByRole("link");
+    const title = (await first.innerText()).trim();
+    await first.click(); // well within the pause after the last key
+    await browser.page.getByRole("heading", { level: 1, name: title }).waitFor();
+    await browser.page.goBack();
+    await browser.page.waitForURL(`${BASE_URL}/writeups?q=seal`);
+    await search.ready();
+    expect(await search.input().inputValue()).toBe("seal");
+  });
+
   it("paints the first ten results and ten more on each request; one or two letters match whole words only", async () => {
     const search = new WriteupSearchPage(browser.page);
     await search.open();
