@@ -35,6 +35,16 @@ describe("PostgreSQL restarted under load", () => {
       if (!healthy) await new Promise((r) => setTimeout(r, 250));
     }
     expect(healthy).toBe(true);
+    // One healthy answer can come from a fresh connection while others in the pool still hold the
+    // old server's closed sockets, each failing its next query once. Within seconds a burst wider
+    // than the pool (10) must find every one of them working again; later tests rely on it too.
+    let healthyBursts = 0;
+    while (healthyBursts < 2 && Date.now() - back < 30000) {
+      const statuses = await Promise.all(Array.from({ length: 12 }, () => fetch(`${BASE_URL}/api/health`).then((r) => r.status, () => 0)));
+      healthyBursts = statuses.every((status) => status === 200) ? healthyBursts + 1 : 0;
+      if (healthyBursts < 2) await new Promise((r) => setTimeout(r, 250));
+    }
+    expect(healthyBursts).toBe(2);
 
     const audit = await auditSteps(result);
     expect(audit.missing).toBe(0);
