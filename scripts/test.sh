@@ -58,7 +58,7 @@ wait_for_http "http://127.0.0.1:$E2E_PORT/api/health" 90 || { tail -n 40 "$resul
 pick_port E2E_FRESH_PORT $((E2E_PORT + 50))
 FRESH_DATABASE_URL=$(db_url_for test "$DB_PORT" rootbench_fresh)
 DATABASE_URL=$FRESH_DATABASE_URL npx tsx --conditions=react-server db/migrate.ts >/dev/null
-start_bg "$results/fresh-mail-worker.log" env DATABASE_URL="$FRESH_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" MAIL_POLL_MS=300 MAIL_FROM="Rootbench <shop@fresh-shop.rootbench.test>" \
+start_bg "$results/fresh-mail-worker.log" env DATABASE_URL="$FRESH_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" MAIL_POLL_MS=300 \
   npx tsx --conditions=react-server scripts/mail/worker.ts
 start_bg "$results/fresh-server.log" env NODE_ENV=production ROOTBENCH_DEMO=0 DATABASE_URL="$FRESH_DATABASE_URL" SMTP_PORT="$E2E_SMTP_PORT" APP_URL="http://127.0.0.1:$E2E_FRESH_PORT" \
   node node_modules/next/dist/bin/next start -p "$E2E_FRESH_PORT" -H 127.0.0.1

@@ -36,3 +36,8 @@ export async function loadShop(conn: Db | Tx = db): Promise<Shop> {
   const shop = parsed.success ? parsed.data : shopSchema.parse(demoWorkshop);
   return { name: shop.name, email: shop.email, phone: shop.phone, openingHours: shop.openingHours, code: shop.code ?? shopCode(shop.name) };
 }
+
+/** The shop as the sender of its mail: "Name <address>". */
+export function shopSender(shop: Pick<Shop, "name" | "email">): string {
+  return `${shop.name} <${shop.email}>`;
+}

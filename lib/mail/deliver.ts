@@ -37,14 +37,16 @@ export interface Deliverer {
  * Only a worker that dies between the acceptance and the write leaves a message to be sent again
  * after its lease, with the same Message-ID, which receiving systems use to drop the repeat.
  */
-export function outboxDeliverer(transport: Transporter, options: { from: string; leaseSeconds?: number }): Deliverer {
+export function outboxDeliverer(
+  transport: Transporter,
+  options: { from: string | (() => Promise<string>); leaseSeconds?: number },
+): Deliverer {
   const token = randomBytes(12).toString("hex");
   const lease = options.leaseSeconds ?? LEASE_SECONDS;
-  const domain = /@([^>\s]+)>?\s*$/.exec(options.from)?.[1] ?? "rootbench.invalid";
   // Messages the server accepted whose 'sent' is not yet recorded, each with its claim kept alive.
   const acceptedUnrecorded = new Map<number, () => void>();
 
-  async function claimNext(): Promise<Claimed | null> {
+  async function claimNext(domain: string): Promise<Claimed | null> {
     const suffix = `${randomBytes(8).toString("hex")}@${domain}`;
     const [row] = await sql<Claimed[]>`
       update mail_outbox m
@@ -100,13 +102,16 @@ export function outboxDeliverer(transport: Transporter, options: { from: string;
     async deliverDue({ batch = 20 } = {}) {
       const report: DeliveryReport = { sent: 0, retrying: 0, failed: 0 };
       for (const id of [...acceptedUnrecorded.keys()]) await recordAccepted(id, report);
+      // The sender is read once per pass, so a shop set up or renamed while the worker runs sends as itself.
+      const from = typeof options.from === "string" ? options.from : await options.from();
+      const domain = /@([^>\s]+)>?\s*$/.exec(from)?.[1] ?? "rootbench.invalid";
       for (let i = 0; i < batch; i++) {
-        const m = await claimNext();
+        const m = await claimNext(domain);
         if (!m) break;
         const release = holdClaim(m.id);
         try {
           await transport.sendMail({
-            from: options.from, to: m.to_address, subject: m.subject, text: m.text_body, messageId: m.message_id,
+            from, to: m.to_address, subject: m.subject, text: m.text_body, messageId: m.message_id,
             ...(m.html_body ? { html: m.html_body } : {}),
           });
         } catch (error) {

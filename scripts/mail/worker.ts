@@ -4,7 +4,7 @@
 import { sql } from "../../db";
 import { outboxDeliverer } from "../../lib/mail/deliver";
 import { smtpConfigFromEnv, smtpTransport } from "../../lib/mail/transport";
-import { loadShop } from "../../lib/cases/shop";
+import { loadShop, shopSender } from "../../lib/cases/shop";
 import { exitWithParents } from "../../lib/mail/exit-with-parents";
 import { sweepOrphans } from "../../lib/storage/sweep";
 
@@ -17,10 +17,10 @@ let running = true;
 async function main() {
   const config = smtpConfigFromEnv();
   const transport = smtpTransport(config);
-  const shop = await loadShop();
-  const from = process.env.MAIL_FROM ?? `${shop.name} <${shop.email}>`;
+  // The shop's name and address as set up now (the first administrator enters them after the worker starts).
+  const from = async () => process.env.MAIL_FROM ?? shopSender(await loadShop());
   const deliverer = outboxDeliverer(transport, { from });
-  console.log(`[mail-worker] sending to ${config.host}:${config.port} every ${pollMs} ms as ${from}`);
+  console.log(`[mail-worker] sending to ${config.host}:${config.port} every ${pollMs} ms as ${process.env.MAIL_FROM ? "MAIL_FROM" : "the shop"}`);
   while (running) {
     try {
       const report = await deliverer.deliverDue();

@@ -1,5 +1,5 @@
 /** Messages the fake SMTP server caught (its control port), newest last. */
-export interface CaughtMessage { subject: string; to: string; text: string; envelopeTo: string[] }
+export interface CaughtMessage { subject: string; from: string; to: string; text: string; envelopeTo: string[] }
 
 export async function waitForMail(controlUrl: string, to: string, timeoutMs = 20_000): Promise<CaughtMessage> {
   const until = Date.now() + timeoutMs;

@@ -109,6 +109,22 @@ describe("the mail outbox", () => {
     transport.close();
   });
 
+  it("reads the sender on every pass, so a shop set up while the worker runs sends as itself", async () => {
+    fake = await startFakeSmtp({ port: 0 });
+    const transport = smtpTransport({ host: "127.0.0.1", port: fake.port });
+    let sender = "Demo Workshop <demo@before.example.test>";
+    const worker = outboxDeliverer(transport, { from: async () => sender });
+    const before = await enqueueMail(db, { to: "first@example.test", subject: "before", text: "x" });
+    expect(await worker.deliverDue()).toEqual({ sent: 1, retrying: 0, failed: 0 });
+    sender = "Later Workshop <bench@after.example.test>";
+    const after = await enqueueMail(db, { to: "second@example.test", subject: "after", text: "x" });
+    expect(await worker.deliverDue()).toEqual({ sent: 1, retrying: 0, failed: 0 });
+    expect(fake.messages.map((m) => m.from)).toEqual(["Demo Workshop <demo@before.example.test>", "Later Workshop <bench@after.example.test>"]);
+    expect((await message(before)).messageId).toMatch(/@before\.example\.test>$/);
+    expect((await message(after)).messageId).toMatch(/@after\.example\.test>$/);
+    transport.close();
+  });
+
   it("two workers never send the same message twice", async () => {
     fake = await startFakeSmtp({ port: 0 });
     const transport = smtpTransport({ host: "127.0.0.1", port: fake.port });
