@@ -1,6 +1,4 @@
 import "server-only";
-import { promisify } from "node:util";
-import zlib from "node:zlib";
 import { sql } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/db";
 import { indexEtag, type IndexVersion } from "./etag";
@@ -73,34 +71,18 @@ export async function writeupIndexDocs(): Promise<WriteupIndexPayload> {
 // The last body built, by version. Safe to keep: the version names everything the body is made of
 // (the published write-ups and the catalogue names they carry), so a body is never served for another.
 // A build in progress is shared, so requests arriving while it runs wait for the same one.
-let cached: Promise<IndexBody> | null = null;
+let cached: Promise<{ etag: string; json: string }> | null = null;
 let cachedEtag: string | null = null;
 
-/**
- * The index as sent: its JSON, and the same gzipped once per version. The app leaves compression to
- * a proxy in front of it, but this is the one large answer (megabytes at thousands of write-ups) and
- * a tablet on the workshop's Wi-Fi downloads it whole.
- */
-export interface IndexBody {
-  etag: string;
-  json: string;
-  gzip: Buffer;
-}
-
-const gzip = promisify(zlib.gzip);
-
 /** The current version, cheaply; the body only when asked for, built from the same rows its ETag names. */
-export async function currentWriteupIndex(): Promise<{ etag: string; body: () => Promise<IndexBody> }> {
+export async function currentWriteupIndex(): Promise<{ etag: string; body: () => Promise<{ etag: string; json: string }> }> {
   const etag = indexEtag(await writeupIndexVersion());
   return {
     etag,
     body: () => {
       if (cached && cachedEtag === etag) return cached;
       cachedEtag = etag;
-      const building = writeupIndexDocs().then(async (payload) => {
-        const json = JSON.stringify(payload);
-        return { etag: payload.version, json, gzip: await gzip(json) };
-      });
+      const building = writeupIndexDocs().then((payload) => ({ etag: payload.version, json: JSON.stringify(payload) }));
       cached = building;
       building.catch(() => {
         if (cached === building) cached = cachedEtag = null;
