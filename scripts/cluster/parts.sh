@@ -83,9 +83,6 @@ start_haproxy() { # port app-port…
     echo "frontend rootbench"
     echo "  bind 127.0.0.1:$port"
     echo "  default_backend apps"
-    # The app leaves compression to the proxy in front of it (next.config.ts).
-    echo "  compression algo gzip"
-    echo "  compression type text/html text/css text/plain text/x-component application/javascript application/json image/svg+xml"
     echo "backend apps"
     echo "  balance roundrobin"
     echo "  option httpchk GET /api/health"
