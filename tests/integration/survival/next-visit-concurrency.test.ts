@@ -11,7 +11,7 @@ import { day, demoIds, insertCases, type DemoIds } from "../reports/fixtures";
 
 const F = "orvanta-tessel-2";
 const SERIAL = "RACE-1";
-const ROUNDS = 15;
+const ROUNDS = 30;
 const CAUSES = ["owc-cage-broken", "owc-rollers-worn", "crank-seal-worn", "belt-worn", "torque-sensor-drift"];
 
 // Every writer of one unit's visits at once: bookings, visits imported between others, bench
