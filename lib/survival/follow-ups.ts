@@ -35,11 +35,14 @@ function groupOf(column: string) {
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
 }
 
-/** The upgrade slugs as an SQL array, in the order of `fittedCounts` (our own fixed list, so inlining them is safe). */
-const upgradeSlugs = pg.unsafe(`array[${UPGRADES.map((u) => `'${u.slug}'`).join(", ")}]`);
+/**
+ * The upgrades as SQL rows: slug, the group it guards and its place in `fittedCounts` (our own fixed
+ * list, so inlining them is safe).
+ */
+const upgradeRows = pg.unsafe(`(values ${UPGRADES.map((u, i) => `('${u.slug}', '${u.guards}', ${i + 1})`).join(", ")}) as u(upgrade, guards, i)`);
 
 /**
- * For each upgrade in that order, how many of the grouped repairs of the group it guards had it fitted
+ * For each upgrade, in the order of UPGRADES, how many of the grouped repairs of the group it guards had it fitted
  * (from the case row's copy); 0 in other groups. The group is tested first, so each repair's upgrades
  * are only searched for the few upgrades that guard its group.
  */
@@ -87,9 +90,9 @@ export function followUpQuery(scope: FollowUpScope, db: TransactionSql | typeof 
     )
     select 'group' as kind, grp as key, days, event, n from tally
     union all
-    select 'fitted', f.upgrade, t.days, t.event, f.n
-    from tally t cross join unnest(${upgradeSlugs}, t.fitted) as f(upgrade, n)
-    where f.n > 0`;
+    select 'fitted', u.upgrade, t.days, t.event, t.fitted[u.i]
+    from tally t join ${upgradeRows} on u.guards = t.grp
+    where t.fitted[u.i] > 0`;
 }
 
 /**
