@@ -368,7 +368,7 @@ export const cases = pgTable(
     /**
      * Copies of this case's own bench outcome, written with it by `storeOutcomeCopies`: the primary
      * confirmed cause and every confirmed cause (outcome_causes) and the upgrades fitted
-     * (outcome_upgrades), so return-free follow-up reads a unit's visits from one index; the parts
+     * (outcome_upgrades), so return-free follow-up reads the repairs from one index; the parts
      * replaced (outcome_parts, ids and quantities in the same order), so parts demand sums them from
      * the case rows without a join. No foreign keys: the outcome tables hold those.
      */
@@ -377,6 +377,14 @@ export const cases = pgTable(
     fittedUpgrades: text("fitted_upgrades").array().$type<UpgradeKind[]>().notNull().default(sql`'{}'::text[]`),
     partIds: integer("part_ids").array().notNull().default(sql`'{}'::integer[]`),
     partQuantities: integer("part_quantities").array().notNull().default(sql`'{}'::integer[]`),
+    /**
+     * Copies of the unit's next visit: the next case of the same motor family and serial by
+     * (created_at, id), its opening time and its confirmed causes, so follow-up reads each repair
+     * with its next visit from its own row. Null when there is none (always without a serial).
+     * Kept by a trigger on cases for every writer (db/migrations/0016_case_next_visit.sql).
+     */
+    nextVisitAt: ts("next_visit_at"),
+    nextVisitCauseIds: integer("next_visit_cause_ids").array(),
     createdAt: createdAt(),
     updatedAt: ts("updated_at").notNull().defaultNow(),
     triagedAt: ts("triaged_at"),
@@ -391,10 +399,12 @@ export const cases = pgTable(
     index("cases_technician_idx").on(t.technicianId),
     index("cases_serial_idx").on(t.serial),
     index("cases_version_idx").on(t.treeVersionId),
-    // A unit's visits in order, with what return-free follow-up reads, so it never sorts the whole table.
-    index("cases_visits_idx")
-      .on(t.familyId, t.serial, t.createdAt, t.id, t.status, t.closedAt, t.ridingUse, t.primaryCauseId, t.confirmedCauseIds, t.fittedUpgrades)
-      .where(sql`${t.serial} <> ''`),
+    // A unit's visits in order: where the next-visit trigger finds a visit's predecessor and its unit's visits.
+    index("cases_visits_idx").on(t.familyId, t.serial, t.createdAt, t.id).where(sql`${t.serial} <> ''`),
+    // The repairs follow-up reads (of one family, or all), with all it reads of them, so it never visits the table's pages.
+    index("cases_follow_up_idx")
+      .on(t.familyId, t.closedAt, t.ridingUse, t.primaryCauseId, t.fittedUpgrades, t.nextVisitAt, t.nextVisitCauseIds)
+      .where(sql`${t.status} = 'closed' and ${t.serial} <> ''`),
     check("cases_status_check", sql`${t.status} in (${inList(CASE_STATUSES)})`),
     check("cases_caller_kind_check", sql`${t.callerKind} in (${inList(CALLER_KINDS)})`),
     check("cases_riding_use_check", sql`${t.ridingUse} in (${inList(RIDING_USES)})`),

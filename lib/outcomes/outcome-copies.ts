@@ -4,8 +4,9 @@ import type { Tx } from "@/db";
 
 /**
  * Copies these cases' bench outcomes onto the case rows: the confirmed causes (the primary one and all
- * of them, by id) and the upgrades fitted, where return-free follow-up reads a unit's visits in one
- * index scan, and the parts replaced (ids and quantities, ordered by part id), where parts demand
+ * of them, by id) and the upgrades fitted, where return-free follow-up reads the repairs in one
+ * index scan (the trigger on cases copies the confirmed causes to the unit's visit before, as its
+ * next visit's), and the parts replaced (ids and quantities, ordered by part id), where parts demand
  * reads closed cases in one index scan. Every writer of outcome_causes, outcome_upgrades or
  * outcome_parts calls it in the same transaction, after those writes and after the case row lock
  * where there is one, so the copy never disagrees with the outcome. It holds only the case's own

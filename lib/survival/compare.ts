@@ -93,10 +93,21 @@ export function survivalAt(steps: KaplanMeierStep[], days: number): { survival: 
 
 export function arm(tally: SurvivalTally[]): Arm {
   const steps = kaplanMeierOfTally(tally);
-  const followedAt = (months: number) => tally.reduce((n, r) => (r.time >= months * DAYS_PER_MONTH ? n + r.events + r.censored : n), 0);
+  // One pass: the units still followed at each month of AT_RISK_MONTHS (which holds 0 and every checkpoint), the returns, the longest follow-up.
+  const followed = AT_RISK_MONTHS.map(() => 0);
+  let returns = 0;
+  let followedDays = 0;
+  for (const r of tally) {
+    AT_RISK_MONTHS.forEach((months, i) => {
+      if (r.time >= months * DAYS_PER_MONTH) followed[i] += r.events + r.censored;
+    });
+    returns += r.events;
+    followedDays = Math.max(followedDays, r.time);
+  }
+  const followedAt = (months: (typeof AT_RISK_MONTHS)[number]) => followed[AT_RISK_MONTHS.indexOf(months)];
   return {
     n: followedAt(0),
-    returns: tally.reduce((n, r) => n + r.events, 0),
+    returns,
     steps,
     checkpoints: CHECKPOINT_MONTHS.map((months) => {
       const atRisk = followedAt(months);
@@ -104,8 +115,8 @@ export function arm(tally: SurvivalTally[]): Arm {
       const s = survivalAt(steps, months * DAYS_PER_MONTH);
       return { months, atRisk, survival: s.survival, lower: s.lower, upper: s.upper };
     }),
-    atRisk: AT_RISK_MONTHS.map((months) => ({ months, n: followedAt(months) })),
-    followedDays: tally.reduce((m, r) => Math.max(m, r.time), 0),
+    atRisk: AT_RISK_MONTHS.map((months, i) => ({ months, n: followed[i] })),
+    followedDays,
   };
 }
 
@@ -142,9 +153,8 @@ export function verdictFor(upgrade: Upgrade, fitted: Arm, notFitted: Arm, pValue
   return { kind, months, text: `Units with ${upgrade.phrase} came back for ${group} faults ${kind === "better" ? "less" : "more"} often: ${figures}.` };
 }
 
-/** Fitted vs not fitted, for every upgrade, among the repairs of the cause group it guards. */
-export function compareUpgrades(rows: FollowUpCount[]): UpgradeComparison[] {
-  const tallies = talliesByKey(rows);
+/** Fitted vs not fitted, for every upgrade, among the repairs of the cause group it guards (tallies from `talliesByKey`). */
+export function compareUpgrades(tallies: Map<string, SurvivalTally[]>): UpgradeComparison[] {
   return UPGRADES.map((upgrade) => {
     const withIt = tallies.get(`fitted:${upgrade.slug}`) ?? [];
     const withoutIt = without(tallies.get(`group:${upgrade.guards}`) ?? [], withIt);

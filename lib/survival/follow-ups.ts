@@ -35,11 +35,14 @@ function groupOf(column: string) {
   return pg.unsafe(`(case ${whens.join(" ")} else 'other' end)`);
 }
 
-/** The upgrade slugs as an SQL array, in the order of `fittedCounts` (our own fixed list, so inlining them is safe). */
-const upgradeSlugs = pg.unsafe(`array[${UPGRADES.map((u) => `'${u.slug}'`).join(", ")}]`);
+/**
+ * The upgrades as SQL rows: slug, the group it guards and its place in `fittedCounts` (our own fixed
+ * list, so inlining them is safe).
+ */
+const upgradeRows = pg.unsafe(`(values ${UPGRADES.map((u, i) => `('${u.slug}', '${u.guards}', ${i + 1})`).join(", ")}) as u(upgrade, guards, i)`);
 
 /**
- * For each upgrade in that order, how many of the grouped repairs of the group it guards had it fitted
+ * For each upgrade, in the order of UPGRADES, how many of the grouped repairs of the group it guards had it fitted
  * (from the case row's copy); 0 in other groups. The group is tested first, so each repair's upgrades
  * are only searched for the few upgrades that guard its group.
  */
@@ -60,42 +63,36 @@ function fittedCounts(upgrades: string, group: string) {
  * twice gives two follow-ups, each ended by the visit after it. Counted in Postgres, grouped.
  */
 export function followUpQuery(scope: FollowUpScope, db: TransactionSql | typeof pg = pg) {
+  const family = scope.familyId === null ? pg`` : pg`and r.family_id = ${scope.familyId}`;
   const use = scope.ridingUse === null ? pg`` : pg`and r.riding_use = ${scope.ridingUse}`;
-  const visitFamily = scope.familyId === null ? pg`` : pg`and c.family_id = ${scope.familyId}`;
-  // The case rows carry copies of their confirmed causes and upgrades fitted (primary_cause_id,
-  // confirmed_cause_ids, fitted_upgrades), so the visits are read from cases_visits_idx alone; each
-  // cause's group still comes from the catalogue. One pass counts the repairs by group, days and
-  // event, with how many had each upgrade fitted; an upgrade's counts are those of the group it guards.
+  // Each case row carries copies of its confirmed causes and upgrades fitted (primary_cause_id,
+  // fitted_upgrades) and of the unit's next visit (next_visit_at, next_visit_cause_ids), so the
+  // repairs in scope are read alone, with no walk over the unit's other visits; each cause's group
+  // still comes from the catalogue. One pass counts the repairs by group, days and event, with how
+  // many had each upgrade fitted; an upgrade's counts are those of the group it guards.
   return db<FollowUpCount[]>`
     with cause_groups as materialized (
       select id, grp, array_agg(id) over (partition by grp) as group_ids
       from (select id, ${groupOf("area")} as grp from causes) g
     ),
-    visits as (
-      select c.status, c.closed_at, c.riding_use, c.primary_cause_id, c.fitted_upgrades,
-             lead(c.created_at) over w as next_at, lead(c.confirmed_cause_ids) over w as next_causes
-      from cases c
-      where c.serial <> '' ${visitFamily}
-      window w as (partition by c.family_id, c.serial order by c.created_at, c.id)
-    ),
     tally as (
       select g.grp,
              -- A difference of two timestamptz is whole days plus under 24 hours, so its day field is the
              -- whole days elapsed (and cheaper than dividing its epoch in numeric).
-             extract(day from case when r.next_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
-                                   else greatest(r.next_at - r.closed_at, interval '0') end)::int as days,
-             coalesce(r.next_at > r.closed_at and r.next_causes && g.group_ids, false) as event,
+             extract(day from case when r.next_visit_at is null then ${scope.asOf.toISOString()}::timestamptz - r.closed_at
+                                   else greatest(r.next_visit_at - r.closed_at, interval '0') end)::int as days,
+             coalesce(r.next_visit_at > r.closed_at and r.next_visit_cause_ids && g.group_ids, false) as event,
              count(*)::int as n, ${fittedCounts("r.fitted_upgrades", "g.grp")} as fitted
-      from visits r join cause_groups g on g.id = r.primary_cause_id
-      where r.status = 'closed' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
-        and r.closed_at < ${scope.to.toISOString()}::timestamptz ${use}
+      from cases r join cause_groups g on g.id = r.primary_cause_id
+      where r.status = 'closed' and r.serial <> '' and r.closed_at >= ${scope.from.toISOString()}::timestamptz
+        and r.closed_at < ${scope.to.toISOString()}::timestamptz ${family} ${use}
       group by 1, 2, 3
     )
     select 'group' as kind, grp as key, days, event, n from tally
     union all
-    select 'fitted', f.upgrade, t.days, t.event, f.n
-    from tally t cross join unnest(${upgradeSlugs}, t.fitted) as f(upgrade, n)
-    where f.n > 0`;
+    select 'fitted', u.upgrade, t.days, t.event, t.fitted[u.i]
+    from tally t join ${upgradeRows} on u.guards = t.grp
+    where t.fitted[u.i] > 0`;
 }
 
 /**

@@ -1,10 +1,10 @@
 import "server-only";
-import { kaplanMeierOfTally } from "@/lib/diagnosis";
+import { kaplanMeierOfTally, type SurvivalTally } from "@/lib/diagnosis";
 import { monthsBefore } from "@/lib/reports/period";
 import { sql as pg } from "@/db";
 import { compareUpgrades, DAYS_PER_MONTH, survivalAt, talliesByKey, type UpgradeComparison } from "./compare";
 import type { SurvivalFilter } from "./filter";
-import { followUps, type FollowUpCount, type FollowUpScope } from "./follow-ups";
+import { followUps, type FollowUpScope } from "./follow-ups";
 import { CAUSE_GROUPS, type CauseGroup } from "./groups";
 import { loadWarrantyMonths } from "./warranty";
 
@@ -41,9 +41,9 @@ export async function followUpScope(filter: SurvivalFilter, asOf = new Date()): 
   };
 }
 
-export function warrantyByGroup(rows: FollowUpCount[], warrantyMonths: number): GroupWarranty[] {
+/** Per cause group (tallies from `talliesByKey`), how many repairs came back within the warranty period. */
+export function warrantyByGroup(tallies: Map<string, SurvivalTally[]>, warrantyMonths: number): GroupWarranty[] {
   const limit = warrantyMonths * DAYS_PER_MONTH;
-  const tallies = talliesByKey(rows);
   return CAUSE_GROUPS.map(({ slug }) => {
     const inGroup = tallies.get(`group:${slug}`) ?? [];
     const steps = kaplanMeierOfTally(inGroup);
@@ -59,10 +59,10 @@ export function warrantyByGroup(rows: FollowUpCount[], warrantyMonths: number): 
 /** Everything the "Does it last?" page shows: one grouped query, the curves and tests worked out here. */
 export async function loadSurvivalReport(filter: SurvivalFilter, asOf = new Date()): Promise<SurvivalReport> {
   const [{ scope, familyName }, warrantyMonths] = await Promise.all([followUpScope(filter, asOf), loadWarrantyMonths()]);
-  const rows = await followUps(scope);
+  const tallies = talliesByKey(await followUps(scope));
   return {
     filter, familyName, from: scope.from, asOf, warrantyMonths,
-    comparisons: compareUpgrades(rows),
-    warranty: warrantyByGroup(rows, warrantyMonths),
+    comparisons: compareUpgrades(tallies),
+    warranty: warrantyByGroup(tallies, warrantyMonths),
   };
 }

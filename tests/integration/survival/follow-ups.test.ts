@@ -9,7 +9,7 @@ import { kaplanMeierOfTally, logRank } from "@/lib/diagnosis";
 import { reopenCaseAction, saveOutcomeAction, startBenchAction } from "@/lib/outcomes/actions";
 import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { upgradeAdviceFor } from "@/lib/survival/advice-query";
-import { compareUpgrades, tallyOf } from "@/lib/survival/compare";
+import { compareUpgrades, talliesByKey, tallyOf } from "@/lib/survival/compare";
 import { followUps, type FollowUpCount } from "@/lib/survival/follow-ups";
 import { saveWarrantyAction } from "@/lib/survival/actions";
 import { loadWarrantyMonths, warrantyReturnOf } from "@/lib/survival/warranty";
@@ -143,7 +143,7 @@ describe("upgrade advice where the record bears it", () => {
     await insertCases(ids, [back("W0"), ...Array.from({ length: 15 }, (_, i) => back(`N${i}`))]);
 
     const rows = await followUps(scope(family));
-    const barrier = compareUpgrades(rows).find((c) => c.upgrade.slug === "crank-seal-barrier")!;
+    const barrier = compareUpgrades(talliesByKey(rows)).find((c) => c.upgrade.slug === "crank-seal-barrier")!;
     expect(barrier.fitted).toMatchObject({ n: 30, returns: 1 });
     expect(barrier.notFitted).toMatchObject({ n: 30, returns: 15 });
     // The same observations through the engine directly: 1 of 30 vs 15 of 30 back at day 40.
