@@ -1,4 +1,4 @@
-import { benchPlan, teardownPlan, teardownPlanInOrder, type Assembly, type BenchInspection } from "@/lib/diagnosis";
+import { benchPlan, teardownPlan, teardownPlanInOrder, teardownPlanner, type Assembly, type BenchInspection } from "@/lib/diagnosis";
 import type { BenchCause, StageInfo } from "./types";
 
 export interface PlanMinutes {
@@ -10,19 +10,24 @@ export interface PlanMinutes {
   catalogue: number;
 }
 
+const assembliesOf = (stages: StageInfo[]): Assembly[] => stages.map((s) => ({ id: s.slug, parent: s.parent, openMinutes: s.openMinutes }));
+
+const inspectionsOf = (causes: BenchCause[]): BenchInspection[] =>
+  causes
+    .filter((c) => c.prior > 0)
+    .map((c) => ({ causeId: c.slug, assemblyId: c.stage, minutes: c.inspectMinutes, probability: c.prior }));
+
 function planInput(stages: StageInfo[], causes: BenchCause[]): { assemblies: Assembly[]; inspections: BenchInspection[] } {
-  return {
-    assemblies: stages.map((s) => ({ id: s.slug, parent: s.parent, openMinutes: s.openMinutes })),
-    inspections: causes
-      .filter((c) => c.prior > 0)
-      .map((c) => ({ causeId: c.slug, assemblyId: c.stage, minutes: c.inspectMinutes, probability: c.prior })),
-  };
+  return { assemblies: assembliesOf(stages), inspections: inspectionsOf(causes) };
 }
 
-/** Expected minutes of the teardown plan alone (planMinutes' `teardown`), for reports over many units. */
-export function teardownMinutes(stages: StageInfo[], causes: BenchCause[]): number {
-  const { assemblies, inspections } = planInput(stages, causes);
-  return teardownPlan(assemblies, inspections).expectedMinutes;
+/**
+ * Expected minutes of the teardown plan alone (planMinutes' `teardown`), for reports over many
+ * units of one family: the stages are checked once, each unit's causes planned in them.
+ */
+export function teardownMinutesIn(stages: StageInfo[]): (causes: BenchCause[]) => number {
+  const plan = teardownPlanner(assembliesOf(stages));
+  return (causes) => plan(inspectionsOf(causes)).expectedMinutes;
 }
 
 /**

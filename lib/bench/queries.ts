@@ -1,10 +1,12 @@
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, type SQL } from "drizzle-orm";
 import { db } from "@/db";
+import { groupBy } from "@/lib/group-by";
 import {
   assemblies, benchFindings, causeLocations, causeParts, causes, cases, motorFamilies, outcomeCauses, type CaseStatus,
 } from "@/db/schema";
-import type { BenchCause, BenchInputs, RecordedFinding, StageInfo } from "./types";
+import { familyBench, type CauseCatalogue, type CauseLocation, type FamilyBench } from "./start";
+import type { BenchInputs, RecordedFinding, StageInfo } from "./types";
 
 export interface BenchCase {
   id: number;
@@ -22,14 +24,29 @@ export interface BenchData {
   photos: Record<string, string>;
 }
 
-/** A family's stages, parents first. */
-export async function familyStages(familyId: number): Promise<(StageInfo & { id: number })[]> {
-  const rows = await db.select().from(assemblies).where(eq(assemblies.familyId, familyId)).orderBy(asc(assemblies.position), asc(assemblies.id));
+type FamilyStage = StageInfo & { id: number };
+
+async function stagesOf(where?: SQL): Promise<Map<number, FamilyStage[]>> {
+  const rows = await db.select().from(assemblies).where(where).orderBy(asc(assemblies.familyId), asc(assemblies.position), asc(assemblies.id));
   const slugOf = new Map(rows.map((r) => [r.id, r.slug]));
-  return rows.map((r) => ({
-    id: r.id, slug: r.slug, name: r.name, parent: r.parentId === null ? null : slugOf.get(r.parentId) ?? null,
-    openMinutes: r.openMinutes, closeMinutes: r.closeMinutes, caution: r.caution,
-  }));
+  const byFamily = new Map<number, FamilyStage[]>();
+  for (const [familyId, familyRows] of groupBy(rows, (r) => r.familyId)) {
+    byFamily.set(familyId, familyRows.map((r) => ({
+      id: r.id, slug: r.slug, name: r.name, parent: r.parentId === null ? null : slugOf.get(r.parentId) ?? null,
+      openMinutes: r.openMinutes, closeMinutes: r.closeMinutes, caution: r.caution,
+    })));
+  }
+  return byFamily;
+}
+
+/** A family's stages, parents first. */
+export async function familyStages(familyId: number): Promise<FamilyStage[]> {
+  return (await stagesOf(eq(assemblies.familyId, familyId))).get(familyId) ?? [];
+}
+
+/** Every family's stages, parents first, by family id. */
+export function stagesByFamily(): Promise<Map<number, FamilyStage[]>> {
+  return stagesOf();
 }
 
 /** Confirmed cause slugs of every closed case of the family. */
@@ -39,38 +56,37 @@ export async function closedCauseSets(familyId: number): Promise<string[][]> {
     .innerJoin(cases, eq(cases.id, outcomeCauses.caseId))
     .innerJoin(causes, eq(causes.id, outcomeCauses.causeId))
     .where(and(eq(cases.familyId, familyId), eq(cases.status, "closed")));
-  const byCase = new Map<number, string[]>();
-  for (const r of rows) byCase.set(r.caseId, [...(byCase.get(r.caseId) ?? []), r.slug]);
-  return [...byCase.values()];
+  return [...groupBy(rows, (r) => r.caseId).values()].map((caseRows) => caseRows.map((r) => r.slug));
 }
 
-/**
- * Every catalogue cause located in the family's unit (or, where a family has no location for a
- * cause the ranking lists, in the unit as received at its stand-alone inspection minutes), with
- * its probability at the end of triage.
- */
-export async function benchCauses(familyId: number, finalRanking: Record<string, number> | null, rootSlug: string): Promise<BenchCause[]> {
-  const [rows, located, partRows] = await Promise.all([
+/** Every catalogue cause with the parts its repair takes. */
+export async function causeCatalogue(): Promise<CauseCatalogue> {
+  const [rows, partRows] = await Promise.all([
     db.select({ id: causes.id, slug: causes.slug, name: causes.name, inspectMinutes: causes.inspectMinutes, labourMinutes: causes.labourMinutes, active: causes.active })
       .from(causes),
-    db.select({ causeId: causeLocations.causeId, stage: assemblies.slug, inspectMinutes: causeLocations.inspectMinutes })
-      .from(causeLocations).innerJoin(assemblies, eq(assemblies.id, causeLocations.assemblyId))
-      .where(eq(causeLocations.familyId, familyId)),
     db.select({ causeId: causeParts.causeId, partId: causeParts.partId, quantity: causeParts.quantity }).from(causeParts),
   ]);
-  const where = new Map(located.map((l) => [l.causeId, l]));
   const partsOf = new Map<number, { id: number; quantity: number }[]>();
-  for (const p of partRows) partsOf.set(p.causeId, [...(partsOf.get(p.causeId) ?? []), { id: p.partId, quantity: p.quantity }]);
-  return rows.flatMap((c) => {
-    const prior = finalRanking?.[c.slug] ?? 0;
-    const loc = where.get(c.id);
-    if (!loc && prior === 0) return [];
-    if (!c.active && prior === 0) return [];
-    return [{
-      id: c.id, slug: c.slug, name: c.name, stage: loc?.stage ?? rootSlug, inspectMinutes: loc?.inspectMinutes ?? c.inspectMinutes, catalogueMinutes: c.inspectMinutes,
-      labourMinutes: c.labourMinutes, prior, parts: partsOf.get(c.id) ?? [],
-    }];
-  });
+  for (const [causeId, parts] of groupBy(partRows, (p) => p.causeId)) partsOf.set(causeId, parts.map((p) => ({ id: p.partId, quantity: p.quantity })));
+  return { causes: rows, partsOf };
+}
+
+/** Where each cause is inspected, by family id (all families, or the one given). */
+export async function causeLocationsByFamily(familyId?: number): Promise<Map<number, CauseLocation[]>> {
+  const rows = await db.select({ familyId: causeLocations.familyId, causeId: causeLocations.causeId, stage: assemblies.slug, inspectMinutes: causeLocations.inspectMinutes })
+    .from(causeLocations).innerJoin(assemblies, eq(assemblies.id, causeLocations.assemblyId))
+    .where(familyId === undefined ? undefined : eq(causeLocations.familyId, familyId));
+  const byFamily = new Map<number, CauseLocation[]>();
+  for (const [family, familyRows] of groupBy(rows, (r) => r.familyId)) {
+    byFamily.set(family, familyRows.map((r) => ({ causeId: r.causeId, stage: r.stage, inspectMinutes: r.inspectMinutes })));
+  }
+  return byFamily;
+}
+
+/** A family's described stages (none yet, perhaps) and its {@link FamilyBench}, read from the database. */
+export async function loadFamilyBench(familyId: number): Promise<{ described: FamilyStage[]; bench: FamilyBench }> {
+  const [described, catalogue, located] = await Promise.all([familyStages(familyId), causeCatalogue(), causeLocationsByFamily(familyId)]);
+  return { described, bench: familyBench(described, catalogue, located.get(familyId) ?? []) };
 }
 
 /** Findings of a case in the order they were recorded. */
@@ -80,8 +96,6 @@ export async function caseFindings(caseId: number): Promise<(RecordedFinding & {
     .where(eq(benchFindings.caseId, caseId)).orderBy(asc(benchFindings.recordedAt), asc(causes.slug));
 }
 
-const FALLBACK_ROOT: StageInfo = { slug: "unit", name: "Unit as received", parent: null, openMinutes: 0, closeMinutes: 0, caution: "none" };
-
 /** Everything the bench screen works from; null when the case does not exist. */
 export async function loadBench(caseId: number): Promise<BenchData | null> {
   const [row] = await db.select({
@@ -89,24 +103,15 @@ export async function loadBench(caseId: number): Promise<BenchData | null> {
     finalRanking: cases.finalRanking, familyName: motorFamilies.name, generation: motorFamilies.generation,
   }).from(cases).innerJoin(motorFamilies, eq(motorFamilies.id, cases.familyId)).where(eq(cases.id, caseId)).limit(1);
   if (!row) return null;
-  const stored = await familyStages(row.familyId);
-  // A family nobody has described yet still gets a plan: everything in the unit as received.
-  const stages: StageInfo[] = stored.length ? stored : [FALLBACK_ROOT];
-  const root = stages.find((s) => s.parent === null)!;
-  const [benchCauseRows, findings, history] = await Promise.all([
-    benchCauses(row.familyId, row.finalRanking, root.slug),
-    caseFindings(caseId),
-    closedCauseSets(row.familyId),
-  ]);
-  const known = new Set(stages.map((s) => s.slug));
+  const [{ bench }, findings, history] = await Promise.all([loadFamilyBench(row.familyId), caseFindings(caseId), closedCauseSets(row.familyId)]);
   return {
     kase: {
       id: row.id, reference: row.reference, status: row.status, symptom: row.symptom, familyId: row.familyId,
       familyLabel: `${row.familyName} ${row.generation}`.trim(),
     },
     inputs: {
-      stages,
-      causes: benchCauseRows.map((c) => (known.has(c.stage) ? c : { ...c, stage: root.slug })),
+      stages: bench.stages,
+      causes: bench.causesAfter(row.finalRanking),
       unlisted: row.finalRanking?.unlisted ?? 0,
       findings: findings.map(({ cause, result, photoId }) => ({ cause, result, photoId })),
       history,

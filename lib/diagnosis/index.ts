@@ -46,6 +46,7 @@ export { kaplanMeierOfTally, logRankOfTally, tallyObservations, type SurvivalTal
 export {
   teardownPlan,
   teardownPlanInOrder,
+  teardownPlanner,
   type Assembly,
   type BenchInspection,
   type TeardownStep,

@@ -91,8 +91,8 @@ function checkAssemblies(assemblies: Assembly[]): { root: string; children: Map<
   const byId = new Map<string, Assembly>();
   for (const a of assemblies) {
     if (byId.has(a.id)) throw new DiagnosisError("duplicate_id", `Two assemblies share the id ${JSON.stringify(a.id)}`);
-    byId.set(a.id, a);
-    requireNonNegative(a.openMinutes, `openMinutes of assembly ${JSON.stringify(a.id)}`, "bad_cost");
+    byId.set(a.id, { id: a.id, parent: a.parent, openMinutes: a.openMinutes });
+    requireNonNegative(a.openMinutes, () => `openMinutes of assembly ${JSON.stringify(a.id)}`, "bad_cost");
   }
   const roots = assemblies.filter((a) => a.parent === null);
   if (roots.length === 0) throw new DiagnosisError("no_root", "No assembly has parent null: the unit as it arrives is missing");
@@ -125,14 +125,14 @@ function checkInspections(inspections: BenchInspection[], byId: Map<string, Asse
   const causes = new Set<string>();
   let total = 0;
   for (const x of inspections) {
-    const name = JSON.stringify(x.causeId);
-    if (causes.has(x.causeId)) throw new DiagnosisError("duplicate_id", `Two inspections share the cause ${name}`);
+    const name = () => JSON.stringify(x.causeId);
+    if (causes.has(x.causeId)) throw new DiagnosisError("duplicate_id", `Two inspections share the cause ${name()}`);
     causes.add(x.causeId);
     if (!byId.has(x.assemblyId)) {
-      throw new DiagnosisError("unknown_assembly", `The inspection of ${name} is in an unknown assembly ${JSON.stringify(x.assemblyId)}`);
+      throw new DiagnosisError("unknown_assembly", `The inspection of ${name()} is in an unknown assembly ${JSON.stringify(x.assemblyId)}`);
     }
-    requireNonNegative(x.minutes, `minutes of the inspection of ${name}`, "bad_cost");
-    total += requireProbability(x.probability, `probability of ${name}`);
+    requireNonNegative(x.minutes, () => `minutes of the inspection of ${name()}`, "bad_cost");
+    total += requireProbability(x.probability, () => `probability of ${name()}`);
   }
   if (total > 1 + SUM_TOLERANCE) {
     throw new DiagnosisError("bad_probability", `Inspection probabilities sum to ${total}, more than 1 (single fault)`);
@@ -149,19 +149,28 @@ function checkInspections(inspections: BenchInspection[], byId: Map<string, Asse
  * than 1 (none of these): then every step may be reached.
  */
 export function teardownPlan(assemblies: Assembly[], inspections: BenchInspection[]): TeardownPlan {
+  return teardownPlanner(assemblies)(inspections);
+}
+
+/**
+ * {@link teardownPlan} for many units of one family: the assemblies are checked (and read) once,
+ * and the function returned plans any set of inspections in them.
+ */
+export function teardownPlanner(assemblies: Assembly[]): (inspections: BenchInspection[]) => TeardownPlan {
   const { root, children, byId } = checkAssemblies(assemblies);
-  checkInspections(inspections, byId);
+  return (inspections) => {
+    checkInspections(inspections, byId);
+    const own = new Map<string, Block[]>([...byId.keys()].map((id) => [id, []]));
+    for (const x of inspections) own.get(x.assemblyId)!.push({ p: x.probability, c: x.minutes, causes: [x.causeId] });
 
-  const own = new Map<string, Block[]>(assemblies.map((a) => [a.id, []]));
-  for (const x of inspections) own.get(x.assemblyId)!.push({ p: x.probability, c: x.minutes, causes: [x.causeId] });
-
-  const chainOf = (id: string): Block[] => {
-    const parts = [...own.get(id)!.map((b) => [b]), ...children.get(id)!.map(chainOf)];
-    const merged = mergeChains(parts);
-    // An assembly with nothing to inspect inside it is never opened.
-    return merged.length === 0 ? [] : prependOpening(byId.get(id)!.openMinutes, merged);
+    const chainOf = (id: string): Block[] => {
+      const parts = [...own.get(id)!.map((b) => [b]), ...children.get(id)!.map(chainOf)];
+      const merged = mergeChains(parts);
+      // An assembly with nothing to inspect inside it is never opened.
+      return merged.length === 0 ? [] : prependOpening(byId.get(id)!.openMinutes, merged);
+    };
+    return stepsFor(chainOf(root).flatMap((b) => b.causes), byId, inspections);
   };
-  return stepsFor(chainOf(root).flatMap((b) => b.causes), byId, inspections);
 }
 
 /**

@@ -5,7 +5,9 @@
 // benchmark (references "BN-…") are left out, so the figures are the demo history's own.
 import { sql as pg } from "../../db";
 import { median, planMinutes } from "../../lib/bench/compare";
-import { benchCauses, familyStages } from "../../lib/bench/queries";
+import { causeCatalogue, causeLocationsByFamily, stagesByFamily } from "../../lib/bench/queries";
+import { familyBench } from "../../lib/bench/start";
+import { groupBy } from "../../lib/group-by";
 
 const mean = (xs: number[]) => xs.reduce((s, x) => s + x, 0) / xs.length;
 
@@ -17,8 +19,7 @@ async function main(): Promise<void> {
     from cases c join motor_families f on f.id = c.family_id
     where c.status = 'closed' and c.final_ranking is not null and c.reference not like 'BN-%'
     order by c.id`;
-  const byFamily = new Map<number, Row[]>();
-  for (const r of rows) byFamily.set(r.familyId, [...(byFamily.get(r.familyId) ?? []), r]);
+  const [stagesOf, catalogue, located] = await Promise.all([stagesByFamily(), causeCatalogue(), causeLocationsByFamily()]);
 
   const table: Record<string, string | number>[] = [];
   const savedAll: number[] = [];
@@ -27,11 +28,10 @@ async function main(): Promise<void> {
   const catPercentAll: number[] = [];
   let differAll = 0;
   const started = performance.now();
-  for (const [familyId, cases] of byFamily) {
-    const stages = await familyStages(familyId);
-    const root = stages.find((s) => s.parent === null);
-    if (!root) continue;
-    const located = await benchCauses(familyId, null, root.slug);
+  for (const [familyId, cases] of groupBy(rows, (r) => r.familyId)) {
+    const stored = stagesOf.get(familyId) ?? [];
+    if (stored.length === 0) continue;
+    const bench = familyBench(stored, catalogue, located.get(familyId) ?? []);
     const aware: number[] = [];
     const flat: number[] = [];
     const saved: number[] = [];
@@ -40,7 +40,7 @@ async function main(): Promise<void> {
     const catPercent: number[] = [];
     let differ = 0;
     for (const c of cases) {
-      const m = planMinutes(stages, located.map((l) => ({ ...l, prior: c.ranking[l.slug] ?? 0 })));
+      const m = planMinutes(bench.stages, bench.causesAfter(c.ranking));
       aware.push(m.teardown);
       flat.push(m.flat);
       saved.push(m.flat - m.teardown);

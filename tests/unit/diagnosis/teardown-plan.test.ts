@@ -5,6 +5,7 @@ import {
   DiagnosisError,
   teardownPlan,
   teardownPlanInOrder,
+  teardownPlanner,
   type Assembly,
   type BenchInspection,
 } from "@/lib/diagnosis";
@@ -207,5 +208,39 @@ describe("teardown plan", () => {
     expect(codeOf(() => teardownPlan([root], [x({ probability: Number.NaN })]))).toBe("bad_probability");
     expect(codeOf(() => teardownPlan([root], [x({ probability: 0.6 }), x({ causeId: "d", probability: 0.6 })]))).toBe("bad_probability");
     expect(codeOf(() => teardownPlan([root], [x(), x()]))).toBe("duplicate_id");
+  });
+
+  it("plans many units of one family with teardownPlanner, as teardownPlan would each", () => {
+    fc.assert(
+      fc.property(instanceArb, instanceArb, ({ assemblies, inspections }, other) => {
+        const plan = teardownPlanner(assemblies);
+        expect(plan(inspections)).toEqual(teardownPlan(assemblies, inspections));
+        // A second unit's inspections in the same assemblies, all in the root so they always fit.
+        const rooted = other.inspections.map((x) => ({ ...x, assemblyId: assemblies.find((a) => a.parent === null)!.id }));
+        expect(plan(rooted)).toEqual(teardownPlan(assemblies, rooted));
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it("checks a planner's assemblies once, when it is made, and keeps them as they were", () => {
+    const assemblies: Assembly[] = [
+      { id: "unit", parent: null, openMinutes: 0 },
+      { id: "housing", parent: "unit", openMinutes: 10 },
+    ];
+    const plan = teardownPlanner(assemblies);
+    assemblies[1].openMinutes = 1000;
+    const inspections: BenchInspection[] = [{ causeId: "clutch", assemblyId: "housing", minutes: 5, probability: 0.5 }];
+    expect(plan(inspections).expectedMinutes).toBeCloseTo(15, 12);
+    expect(codeOf(() => teardownPlanner([{ id: "a", parent: "a", openMinutes: 1 }]))).toBe("no_root");
+    expect(codeOf(() => plan([{ causeId: "clutch", assemblyId: "crank", minutes: 5, probability: 0.5 }]))).toBe("unknown_assembly");
+  });
+
+  it("names the offending inspection in its error message", () => {
+    const root: Assembly = { id: "unit", parent: null, openMinutes: 0 };
+    expect(() => teardownPlan([root], [{ causeId: "clutch", assemblyId: "unit", minutes: -1, probability: 0.5 }]))
+      .toThrow('minutes of the inspection of "clutch" must be a finite number ≥ 0, got -1');
+    expect(() => teardownPlan([{ ...root, openMinutes: -2 }], []))
+      .toThrow('openMinutes of assembly "unit" must be a finite number ≥ 0, got -2');
   });
 });

@@ -7,7 +7,7 @@ import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
 import { may } from "@/lib/auth/roles";
 import { STAGE_CAUTION } from "@/lib/bench/cautions";
-import { benchCauses, familyStages } from "@/lib/bench/queries";
+import { loadFamilyBench } from "@/lib/bench/queries";
 import { listFamilies } from "@/lib/catalogue/queries";
 import { deleteAssembly, saveAssembly, saveLocation } from "./actions";
 
@@ -25,9 +25,8 @@ export default async function FamilyStagesPage({ params }: { params: Promise<{ s
   const family = (await listFamilies()).find((f) => f.slug === slug);
   if (!family) notFound();
   const canEdit = may(user.role, "catalogue:edit");
-  const stages = await familyStages(family.id);
-  const root = stages.find((s) => s.parent === null);
-  const located = root ? (await benchCauses(family.id, null, root.slug)).sort((a, b) => a.name.localeCompare(b.name)) : [];
+  const { described: stages, bench } = await loadFamilyBench(family.id);
+  const located = bench.causesAfter(null).sort((a, b) => a.name.localeCompare(b.name));
   const parentOf = new Map(stages.map((s) => [s.slug, s.parent]));
   const stageName = new Map(stages.map((s) => [s.slug, s.name]));
 
@@ -56,7 +55,7 @@ export default async function FamilyStagesPage({ params }: { params: Promise<{ s
           </div>
         ) : null}
       </Panel>
-      {root ? (
+      {stages.length > 0 ? (
         <Panel title={`Where each cause is inspected (${located.length})`}>
           {canEdit ? located.map((c) => (
             <LocationForm key={c.slug} family={family.slug} cause={c.slug} name={c.name} stage={c.stage} inspectMinutes={c.inspectMinutes} stages={stages} save={saveLocation} />
