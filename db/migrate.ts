@@ -19,10 +19,13 @@ if (require.main === module) {
   runMigrations()
     .then(async () => {
       // Tables of learned likelihoods a database from before they were stored lacks (needs the engine, so not SQL).
+      // Likewise the planned teardown minutes of bench outcomes saved before they were stored.
       const { relearnMissing } = await import("../lib/review/learned");
+      const { plannedTeardownMissing } = await import("../lib/bench/planned-teardown");
       const { sql } = await import("./index");
-      const learned = await relearnMissing().finally(() => sql.end({ timeout: 5 }));
-      console.log(`migrations applied in ${Date.now() - started} ms${learned ? `; likelihoods learned for ${learned} tree version${learned === 1 ? "" : "s"}` : ""}`);
+      const [learned, planned] = await Promise.all([relearnMissing(), plannedTeardownMissing()]).finally(() => sql.end({ timeout: 5 }));
+      console.log(`migrations applied in ${Date.now() - started} ms${learned ? `; likelihoods learned for ${learned} tree version${learned === 1 ? "" : "s"}` : ""}` +
+        `${planned ? `; teardown planned for ${planned} bench outcome${planned === 1 ? "" : "s"}` : ""}`);
     })
     .catch((error: unknown) => {
       console.error("migration failed:", error instanceof Error ? error.message : error);

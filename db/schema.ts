@@ -450,6 +450,12 @@ export const caseOutcomes = pgTable("case_outcomes", {
   otherCause: text("other_cause").notNull().default(""),
   upgrades: text("upgrades").notNull().default(""),
   labourMinutes: integer("labour_minutes").notNull().default(0),
+  /**
+   * Expected teardown minutes of the bench plan the case's final ranking gave, in its family's
+   * stages as they stood when the outcome was saved; null without a final ranking (an imported
+   * record). Written with the outcome (storePlannedTeardown), read by "plan against recorded labour".
+   */
+  plannedTeardownMinutes: doublePrecision("planned_teardown_minutes"),
   notes: text("notes").notNull().default(""),
   recordedBy: text("recorded_by").references(() => users.id),
   recordedAt: ts("recorded_at").notNull().defaultNow(),

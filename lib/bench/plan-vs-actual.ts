@@ -1,10 +1,6 @@
 import "server-only";
 import { sql as pg } from "@/db";
-import { groupBy } from "@/lib/group-by";
 import { inScope, type ReportScope } from "@/lib/reports/scope";
-import { median, teardownMinutesIn } from "./compare";
-import { causeCatalogue, causeLocationsByFamily, stagesByFamily } from "./queries";
-import { familyBench } from "./start";
 
 export interface PlanVsActualRow {
   familyId: number;
@@ -18,29 +14,19 @@ export interface PlanVsActualRow {
 
 /**
  * Per motor family, closed cases in scope with a triage ranking and recorded labour: the expected
- * teardown minutes of the plan the bench screen started from (its stages and the case's final
- * ranking) against the labour the technician recorded.
+ * teardown minutes of the plan the bench started from (stored with the outcome) against the labour
+ * the technician recorded. Medians are the mean of the two middle values for an even count.
  */
 export async function planVsActual(scope: ReportScope): Promise<PlanVsActualRow[]> {
-  type Row = { familyId: number; family: string; ranking: Record<string, number>; labour: number };
-  const [rows, stages, catalogue, located] = await Promise.all([
-    pg<Row[]>`
-      select c.family_id as "familyId", f.name || case when f.generation <> '' then ' ' || f.generation else '' end as family,
-             c.final_ranking as ranking, o.labour_minutes as labour
-      from cases c
-      join case_outcomes o on o.case_id = c.id
-      join motor_families f on f.id = c.family_id
-      where ${inScope(scope)} and c.final_ranking is not null and o.labour_minutes > 0`,
-    stagesByFamily(),
-    causeCatalogue(),
-    causeLocationsByFamily(),
-  ]);
-  return [...groupBy(rows, (r) => r.familyId)]
-    .map(([familyId, familyCases]) => {
-      const bench = familyBench(stages.get(familyId) ?? [], catalogue, located.get(familyId) ?? []);
-      const minutesOf = teardownMinutesIn(bench.stages);
-      const planned = familyCases.map((c) => minutesOf(bench.causesAfter(c.ranking)));
-      return { familyId, family: familyCases[0].family, cases: familyCases.length, planned: median(planned), recorded: median(familyCases.map((c) => c.labour)) };
-    })
-    .sort((a, b) => a.family.localeCompare(b.family));
+  return pg<PlanVsActualRow[]>`
+    select c.family_id as "familyId", f.name || case when f.generation <> '' then ' ' || f.generation else '' end as family,
+           count(*)::int as cases,
+           percentile_cont(0.5) within group (order by o.planned_teardown_minutes) as planned,
+           percentile_cont(0.5) within group (order by o.labour_minutes) as recorded
+    from cases c
+    join case_outcomes o on o.case_id = c.id
+    join motor_families f on f.id = c.family_id
+    where ${inScope(scope)} and o.planned_teardown_minutes is not null and o.labour_minutes > 0
+    group by c.family_id, f.name, f.generation
+    order by family`;
 }

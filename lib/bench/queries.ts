@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, eq, inArray, type SQL } from "drizzle-orm";
-import { db } from "@/db";
+import { db, type Db, type Tx } from "@/db";
 import { groupBy } from "@/lib/group-by";
 import {
   assemblies, benchFindings, causeLocations, causeParts, causes, cases, motorFamilies, outcomeCauses, type CaseStatus,
@@ -26,8 +26,8 @@ export interface BenchData {
 
 type FamilyStage = StageInfo & { id: number };
 
-async function stagesOf(where?: SQL): Promise<Map<number, FamilyStage[]>> {
-  const rows = await db.select().from(assemblies).where(where).orderBy(asc(assemblies.familyId), asc(assemblies.position), asc(assemblies.id));
+async function stagesOf(conn: Db | Tx, where?: SQL): Promise<Map<number, FamilyStage[]>> {
+  const rows = await conn.select().from(assemblies).where(where).orderBy(asc(assemblies.familyId), asc(assemblies.position), asc(assemblies.id));
   const slugOf = new Map(rows.map((r) => [r.id, r.slug]));
   const byFamily = new Map<number, FamilyStage[]>();
   for (const [familyId, familyRows] of groupBy(rows, (r) => r.familyId)) {
@@ -41,12 +41,12 @@ async function stagesOf(where?: SQL): Promise<Map<number, FamilyStage[]>> {
 
 /** A family's stages, parents first. */
 export async function familyStages(familyId: number): Promise<FamilyStage[]> {
-  return (await stagesOf(eq(assemblies.familyId, familyId))).get(familyId) ?? [];
+  return (await stagesOf(db, eq(assemblies.familyId, familyId))).get(familyId) ?? [];
 }
 
 /** Every family's stages, parents first, by family id. */
-export function stagesByFamily(): Promise<Map<number, FamilyStage[]>> {
-  return stagesOf();
+export function stagesByFamily(conn: Db | Tx = db): Promise<Map<number, FamilyStage[]>> {
+  return stagesOf(conn);
 }
 
 /** Confirmed cause slugs of every closed case of the family. */
@@ -60,11 +60,11 @@ export async function closedCauseSets(familyId: number): Promise<string[][]> {
 }
 
 /** Every catalogue cause with the parts its repair takes. */
-export async function causeCatalogue(): Promise<CauseCatalogue> {
+export async function causeCatalogue(conn: Db | Tx = db): Promise<CauseCatalogue> {
   const [rows, partRows] = await Promise.all([
-    db.select({ id: causes.id, slug: causes.slug, name: causes.name, inspectMinutes: causes.inspectMinutes, labourMinutes: causes.labourMinutes, active: causes.active })
+    conn.select({ id: causes.id, slug: causes.slug, name: causes.name, inspectMinutes: causes.inspectMinutes, labourMinutes: causes.labourMinutes, active: causes.active })
       .from(causes),
-    db.select({ causeId: causeParts.causeId, partId: causeParts.partId, quantity: causeParts.quantity }).from(causeParts),
+    conn.select({ causeId: causeParts.causeId, partId: causeParts.partId, quantity: causeParts.quantity }).from(causeParts),
   ]);
   const partsOf = new Map<number, { id: number; quantity: number }[]>();
   for (const [causeId, parts] of groupBy(partRows, (p) => p.causeId)) partsOf.set(causeId, parts.map((p) => ({ id: p.partId, quantity: p.quantity })));
@@ -72,8 +72,8 @@ export async function causeCatalogue(): Promise<CauseCatalogue> {
 }
 
 /** Where each cause is inspected, by family id (all families, or the one given). */
-export async function causeLocationsByFamily(familyId?: number): Promise<Map<number, CauseLocation[]>> {
-  const rows = await db.select({ familyId: causeLocations.familyId, causeId: causeLocations.causeId, stage: assemblies.slug, inspectMinutes: causeLocations.inspectMinutes })
+export async function causeLocationsByFamily(conn: Db | Tx = db, familyId?: number): Promise<Map<number, CauseLocation[]>> {
+  const rows = await conn.select({ familyId: causeLocations.familyId, causeId: causeLocations.causeId, stage: assemblies.slug, inspectMinutes: causeLocations.inspectMinutes })
     .from(causeLocations).innerJoin(assemblies, eq(assemblies.id, causeLocations.assemblyId))
     .where(familyId === undefined ? undefined : eq(causeLocations.familyId, familyId));
   const byFamily = new Map<number, CauseLocation[]>();
@@ -85,7 +85,7 @@ export async function causeLocationsByFamily(familyId?: number): Promise<Map<num
 
 /** A family's described stages (none yet, perhaps) and its {@link FamilyBench}, read from the database. */
 export async function loadFamilyBench(familyId: number): Promise<{ described: FamilyStage[]; bench: FamilyBench }> {
-  const [described, catalogue, located] = await Promise.all([familyStages(familyId), causeCatalogue(), causeLocationsByFamily(familyId)]);
+  const [described, catalogue, located] = await Promise.all([familyStages(familyId), causeCatalogue(), causeLocationsByFamily(db, familyId)]);
   return { described, bench: familyBench(described, catalogue, located.get(familyId) ?? []) };
 }
 

@@ -4,6 +4,7 @@ import { db } from "@/db";
 import { caseOutcomes, cases, causes, outcomeCauses, outcomeParts, outcomeUpgrades, parts, uploads } from "@/db/schema";
 import { defineAction } from "@/lib/actions/define";
 import { AppError } from "@/lib/errors";
+import { storePlannedTeardown } from "@/lib/bench/planned-teardown";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
 import { relearn } from "@/lib/review/learned";
 import { storeOutcomeCopies } from "./outcome-copies";
@@ -60,6 +61,7 @@ export const saveOutcomeAction = defineAction({
       if (input.parts.length) await tx.insert(outcomeParts).values(input.parts.map((p) => ({ caseId: c.id, ...p })));
       await storeOutcomeCopies(tx, [c.id]);
       await storeTriageScores(tx, [c.id]);
+      await storePlannedTeardown(tx, [c.id]);
       if (input.detachPhotoIds.length) {
         await tx.update(uploads).set({ caseId: null }).where(and(eq(uploads.caseId, c.id), inArray(uploads.id, input.detachPhotoIds)));
       }

@@ -2,6 +2,7 @@
 // seeded bench database: `npx tsx --conditions=react-server scripts/bench/reports.ts`.
 // Each report is timed next to `select count(*)` over the same cases in the same run.
 import { sql as pg } from "../../db";
+import { planVsActual } from "../../lib/bench/plan-vs-actual";
 import { accuracySumsQuery, treeAccuracy } from "../../lib/reports/accuracy";
 import { causeCountsQuery, causePareto } from "../../lib/reports/pareto";
 import { partsDemand, partsDemandQuery } from "../../lib/reports/parts";
@@ -63,8 +64,8 @@ async function generate(): Promise<{ added: number; ms: number }> {
       select m.new_id, s.seq, s.node_id, s.option_id, s.answered_by, s.answered_at, '{}'::jsonb
       from bench_map m join case_steps s on s.case_id = m.old_id`;
     await tx`
-      insert into case_outcomes (case_id, other_cause, upgrades, labour_minutes, notes, recorded_by, recorded_at)
-      select m.new_id, o.other_cause, o.upgrades, o.labour_minutes, o.notes, o.recorded_by, m.closed_at
+      insert into case_outcomes (case_id, other_cause, upgrades, labour_minutes, planned_teardown_minutes, notes, recorded_by, recorded_at)
+      select m.new_id, o.other_cause, o.upgrades, o.labour_minutes, o.planned_teardown_minutes, o.notes, o.recorded_by, m.closed_at
       from bench_map m join case_outcomes o on o.case_id = m.old_id`;
     await tx`insert into outcome_causes (case_id, cause_id, is_primary) select m.new_id, o.cause_id, o.is_primary from bench_map m join outcome_causes o on o.case_id = m.old_id`;
     await tx`insert into outcome_parts (case_id, part_id, quantity) select m.new_id, o.part_id, o.quantity from bench_map m join outcome_parts o on o.case_id = m.old_id`;
@@ -123,6 +124,7 @@ async function scenario(label: string, scope: ReportScope, months: number) {
     await time("parts demand per month", () => partsDemand(scope)),
     await time("repeat-return rate", () => repeatRate(scope)),
     await time("tree accuracy (stored triage scores)", () => treeAccuracy(scope)),
+    await time("bench plan against recorded labour", () => planVsActual(scope)),
     // Repairs closed in the last `months` months of the family: the same cases as the count, followed to today.
     await time("does it last? (follow-ups, curves, log-rank)", () => loadSurvivalReport({ familySlug: scope.filter.familySlug, ridingUse: null, months })),
   ];

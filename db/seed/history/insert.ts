@@ -1,6 +1,7 @@
 import { eq, sql } from "drizzle-orm";
 import type { Tx } from "@/db";
 import { caseEvents, caseOutcomes, cases, caseSteps, outcomeCauses, outcomeParts, outcomeUpgrades } from "@/db/schema";
+import { storePlannedTeardown } from "@/lib/bench/planned-teardown";
 import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
 import type { TreeGraph } from "@/lib/trees/graph-types";
@@ -73,6 +74,7 @@ export async function insertHistory(tx: Tx, sims: SimCase[], ids: HistoryIds): P
     if (upgradeRows.length) await tx.insert(outcomeUpgrades).values(upgradeRows);
     await storeOutcomeCopies(tx, batch.map(({ id }) => id));
     await storeTriageScores(tx, batch.map(({ id }) => id));
+    await storePlannedTeardown(tx, batch.map(({ id }) => id));
   }
 
   const events = sims.flatMap((s, i) => {

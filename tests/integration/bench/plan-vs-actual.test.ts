@@ -2,6 +2,7 @@ import { eq, inArray } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { assemblies, caseOutcomes, causeLocations, causes, motorFamilies } from "@/db/schema";
+import { plannedTeardownMissing, storePlannedTeardown } from "@/lib/bench/planned-teardown";
 import { planVsActual } from "@/lib/bench/plan-vs-actual";
 import { parseReportFilter } from "@/lib/reports/period";
 import { resolveScope } from "@/lib/reports/scope";
@@ -18,6 +19,8 @@ const UNLOCATED = "belt-worn";
 // the unit as received at its catalogue minutes, set here to 10.
 describe("plan against recorded labour (the reports page's bench section)", () => {
   let familyId: number;
+  let caseIds: number[];
+  let housingId: number;
 
   beforeAll(async () => {
     await resetToDemo();
@@ -26,6 +29,7 @@ describe("plan against recorded labour (the reports page's bench section)", () =
     const [unit] = await db.insert(assemblies).values({ familyId, slug: "unit", name: "Unit", parentId: null, openMinutes: 0 }).returning({ id: assemblies.id });
     const [housing] = await db.insert(assemblies).values({ familyId, slug: "housing", name: "Housing", parentId: unit.id, openMinutes: 20, position: 1 }).returning({ id: assemblies.id });
     const [gearbox] = await db.insert(assemblies).values({ familyId, slug: "gearbox", name: "Gearbox", parentId: housing.id, openMinutes: 10, position: 2 }).returning({ id: assemblies.id });
+    housingId = housing.id;
     const ids = await demoIds();
     await db.insert(causeLocations).values([
       { familyId, causeId: ids.cause(HOUSING), assemblyId: housing.id, inspectMinutes: 5 },
@@ -34,7 +38,7 @@ describe("plan against recorded labour (the reports page's bench section)", () =
     await db.update(causes).set({ inspectMinutes: 10 }).where(eq(causes.slug, UNLOCATED));
 
     const closedAt = day("2019-06-01");
-    const caseIds = await insertCases(ids, [
+    caseIds = await insertCases(ids, [
       { family: "plan-test", tree: "pedal-slip", closedAt, primary: HOUSING, ranking: { [HOUSING]: 0.6, [GEARBOX]: 0.3, unlisted: 0.1 } },
       { family: "plan-test", tree: "pedal-slip", closedAt, primary: GEARBOX, ranking: { [HOUSING]: 0.1, [GEARBOX]: 0.8, [UNLOCATED]: 0.05, unlisted: 0.05 } },
       // Left out: no ranking (an imported record), and no labour recorded.
@@ -68,5 +72,36 @@ describe("plan against recorded labour (the reports page's bench section)", () =
     ]);
     // One cause in the housing of the demo family's unit: its plan is that stage's opening and the cause's inspection.
     expect(rows[0].planned).toBeGreaterThan(0);
+  });
+
+  it("keeps the plan of the day the outcome was saved when the stages are edited later, and plans again when it is saved again", async () => {
+    const scope = await resolveScope(parseReportFilter({ ...PERIOD, family: "plan-test" }));
+    await db.update(assemblies).set({ openMinutes: 120 }).where(eq(assemblies.id, housingId));
+    expect((await planVsActual(scope))[0].planned).toBeCloseTo(33.3, 9);
+    // Saved again (say, reopened and closed): case 1 is now 120 + 5 + 0.4 × 14 = 130.6 and case 2
+    // 120 + 10 + 4 + 0.2 × 5 + 0.1 × 10 = 136, median 133.3.
+    await db.transaction((tx) => storePlannedTeardown(tx, caseIds.slice(0, 2)));
+    expect((await planVsActual(scope))[0].planned).toBeCloseTo(133.3, 9);
+    await db.update(assemblies).set({ openMinutes: 20 }).where(eq(assemblies.id, housingId));
+    await db.transaction((tx) => storePlannedTeardown(tx, caseIds.slice(0, 2)));
+  });
+
+  it("leaves an outcome without a final ranking unplanned, and plans on start-up the outcomes saved before the figure was stored", async () => {
+    const stored = async () => (await db.select({ id: caseOutcomes.caseId, planned: caseOutcomes.plannedTeardownMinutes }).from(caseOutcomes)
+      .where(inArray(caseOutcomes.caseId, caseIds))).sort((a, b) => a.id - b.id).map((r) => r.planned);
+    const before = await stored();
+    expect(before[2]).toBeNull();
+    expect(before.filter((p) => p === null)).toHaveLength(1);
+    await db.update(caseOutcomes).set({ plannedTeardownMinutes: null }).where(inArray(caseOutcomes.caseId, caseIds));
+    expect(await plannedTeardownMissing()).toBeGreaterThanOrEqual(5);
+    expect(await stored()).toEqual(before);
+    expect(await plannedTeardownMissing()).toBe(0);
+  });
+
+  it("saves the outcome of a case whose ranking the planner refuses, without a planned figure", async () => {
+    const ids = await demoIds();
+    const [odd] = await insertCases(ids, [{ family: "plan-test", tree: "pedal-slip", closedAt: day("2019-07-01"), primary: HOUSING, ranking: { [HOUSING]: 0.9, [GEARBOX]: 0.9 } }]);
+    const [row] = await db.select({ planned: caseOutcomes.plannedTeardownMinutes }).from(caseOutcomes).where(eq(caseOutcomes.caseId, odd));
+    expect(row.planned).toBeNull();
   });
 });

@@ -3,6 +3,7 @@ import { db } from "@/db";
 import { caseOutcomes, cases, caseSteps, causes, motorFamilies, outcomeCauses, outcomeParts, parts, trees, treeVersions, type CaseStatus } from "@/db/schema";
 import { storeOutcomeCopies } from "@/lib/outcomes/outcome-copies";
 import { storeTriageScores } from "@/lib/reports/triage-scores";
+import { storePlannedTeardown } from "@/lib/bench/planned-teardown";
 import { relearn } from "@/lib/review/learned";
 import { loadGraph } from "@/lib/trees/graph";
 
@@ -111,6 +112,7 @@ export async function insertCases(ids: DemoIds, specs: CaseSpec[]): Promise<numb
     await db.transaction(async (tx) => {
       await storeOutcomeCopies(tx, caseIds);
       await storeTriageScores(tx, withOutcome.map(({ id }) => id));
+      await storePlannedTeardown(tx, withOutcome.map(({ id }) => id));
     });
     const stepRows = group.flatMap((s, i) => {
       if (s.steps === false) return [];

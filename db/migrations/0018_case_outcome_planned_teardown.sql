@@ -1,0 +1,1 @@
+ALTER TABLE "case_outcomes" ADD COLUMN "planned_teardown_minutes" double precision;
