@@ -3,11 +3,13 @@ import { planVsActual, type PlanVsActualRow } from "@/lib/bench/plan-vs-actual";
 import { treeAccuracy, type VersionAccuracy } from "./accuracy";
 import { causePareto, type Pareto } from "./pareto";
 import { partsDemand, type PartsDemand } from "./parts";
+import type { ReportFilter } from "./period";
 import { repeatRate, type RepeatRate } from "./repeats";
-import type { ReportScope } from "./scope";
+import { resolveScope, type ReportScope } from "./scope";
 import { causeTrend, type CauseTrend } from "./trend";
 
 export interface ShopReport {
+  scope: ReportScope;
   pareto: Pareto;
   trend: CauseTrend;
   parts: PartsDemand;
@@ -17,9 +19,10 @@ export interface ShopReport {
 }
 
 /** Everything /reports shows for one period and family, each part its own query, all at once. */
-export async function loadShopReport(scope: ReportScope): Promise<ShopReport> {
+export async function loadShopReport(filter: ReportFilter): Promise<ShopReport> {
+  const scope = await resolveScope(filter);
   const [pareto, trend, parts, repeats, accuracy, benchPlans] = await Promise.all([
     causePareto(scope), causeTrend(scope), partsDemand(scope), repeatRate(scope), treeAccuracy(scope), planVsActual(scope),
   ]);
-  return { pareto, trend, parts, repeats, accuracy, benchPlans };
+  return { scope, pareto, trend, parts, repeats, accuracy, benchPlans };
 }

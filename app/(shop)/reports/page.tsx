@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { Suspense } from "react";
 import { AccuracySection } from "@/components/reports/accuracy-section";
 import { ParetoSection } from "@/components/reports/pareto-section";
 import { PlanVsActualSection } from "@/components/reports/plan-vs-actual-section";
@@ -11,9 +10,8 @@ import { TrendSection } from "@/components/reports/trend-section";
 import { requireRole } from "@/lib/auth/require-role";
 import { may } from "@/lib/auth/roles";
 import { loadShopReport } from "@/lib/reports";
-import type { ReportScope } from "@/lib/reports/scope";
 import { filterQuery, parseReportFilter } from "@/lib/reports/period";
-import { familyOptions, resolveScope } from "@/lib/reports/scope";
+import { familyOptions } from "@/lib/reports/scope";
 import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Reports" };
@@ -22,8 +20,8 @@ export const metadata: Metadata = { title: "Reports" };
 export default async function ReportsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requireRole("reports:read", "/reports");
   const params = await searchParams;
-  const [scope, families] = await Promise.all([resolveScope(parseReportFilter(params)), familyOptions()]);
-  const { filter } = scope;
+  const [report, families] = await Promise.all([loadShopReport(parseReportFilter(params)), familyOptions()]);
+  const { filter } = report.scope;
   const query = filterQuery(filter);
   const version = Number(Array.isArray(params.version) ? params.version[0] : params.version);
   const { from, to } = filter.period;
@@ -33,7 +31,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
       <div>
         <h1>Shop reports</h1>
         <p className="text-ink-soft" data-testid="report-scope">
-          Closed cases from {formatDay(from)} to {formatDay(new Date(to.getTime() - 1))}, {scope.familyName ?? "all motor families"}.
+          Closed cases from {formatDay(from)} to {formatDay(new Date(to.getTime() - 1))}, {report.scope.familyName ?? "all motor families"}.
         </p>
         <p className="text-sm"><Link href="/reports/lasting">Does the repair last? Return-free time after repairs, by upgrade</Link></p>
       </div>
@@ -43,31 +41,18 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         exportHref={may(user.role, "reports:export") ? `/api/exports/cases?${query}` : null}
         importHref={may(user.role, "reports:import") ? "/reports/import" : null}
       />
-      <Suspense fallback={<p className="text-ink-soft" role="status">Counting the closed cases…</p>}>
-        <ReportSections scope={scope} selectedVersionId={Number.isSafeInteger(version) ? version : null} query={query} />
-      </Suspense>
-    </div>
-  );
-}
-
-/** The report's sections, streamed in once their queries are done (the heading and filter show first). */
-async function ReportSections({ scope, selectedVersionId, query }: { scope: ReportScope; selectedVersionId: number | null; query: string }) {
-  const report = await loadShopReport(scope);
-  const { period } = scope.filter;
-  return (
-    <>
       <ParetoSection pareto={report.pareto} />
-      <TrendSection trend={report.trend} period={period} />
+      <TrendSection trend={report.trend} period={filter.period} />
       <AccuracySection
         accuracy={report.accuracy}
-        selectedVersionId={selectedVersionId}
+        selectedVersionId={Number.isSafeInteger(version) ? version : null}
         linkFor={(id) => `/reports?${query}&version=${id}#calibration`}
       />
       <div className="grid gap-6">
-        <PartsSection demand={report.parts} period={period} />
+        <PartsSection demand={report.parts} period={filter.period} />
         <RepeatSection repeats={report.repeats} />
         <PlanVsActualSection rows={report.benchPlans} />
       </div>
-    </>
+    </div>
   );
 }
