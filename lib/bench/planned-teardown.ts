@@ -20,7 +20,16 @@ const CHUNK = 1000;
  */
 export async function storePlannedTeardown(tx: Tx, caseIds: number[]): Promise<void> {
   if (caseIds.length === 0) return;
-  const [stages, catalogue, located] = await Promise.all([stagesByFamily(tx), causeCatalogue(tx), causeLocationsByFamily(tx)]);
+  const rows: { id: number; familyId: number; ranking: Record<string, number> | null }[] = [];
+  for (let i = 0; i < caseIds.length; i += CHUNK) {
+    rows.push(...await tx.select({ id: cases.id, familyId: cases.familyId, ranking: cases.finalRanking })
+      .from(cases).innerJoin(caseOutcomes, eq(caseOutcomes.caseId, cases.id))
+      .where(and(inArray(cases.id, caseIds.slice(i, i + CHUNK)), isNotNull(cases.finalRanking))));
+  }
+  if (rows.length === 0) return;
+  // Only the stages and locations of the families these cases are of.
+  const families = [...new Set(rows.map((r) => r.familyId))];
+  const [stages, catalogue, located] = await Promise.all([stagesByFamily(tx, families), causeCatalogue(tx), causeLocationsByFamily(tx, families)]);
   const planners = new Map<number, (ranking: Record<string, number>) => number | null>();
   const plannerOf = (familyId: number) => {
     let planner = planners.get(familyId);
@@ -39,15 +48,12 @@ export async function storePlannedTeardown(tx: Tx, caseIds: number[]): Promise<v
     }
     return planner;
   };
-  for (let i = 0; i < caseIds.length; i += CHUNK) {
-    const rows = await tx.select({ id: cases.id, familyId: cases.familyId, ranking: cases.finalRanking })
-      .from(cases).innerJoin(caseOutcomes, eq(caseOutcomes.caseId, cases.id))
-      .where(and(inArray(cases.id, caseIds.slice(i, i + CHUNK)), isNotNull(cases.finalRanking)));
-    if (rows.length === 0) continue;
-    const minutes = rows.map((r) => plannerOf(r.familyId)(r.ranking!) ?? "NULL");
+  for (let i = 0; i < rows.length; i += CHUNK) {
+    const chunk = rows.slice(i, i + CHUNK);
+    const minutes = chunk.map((r) => plannerOf(r.familyId)(r.ranking!) ?? "NULL");
     await tx.execute(sql`
       update case_outcomes o set planned_teardown_minutes = v.minutes
-      from unnest(${`{${rows.map((r) => r.id).join(",")}}`}::int[], ${`{${minutes.join(",")}}`}::float8[]) as v(case_id, minutes)
+      from unnest(${`{${chunk.map((r) => r.id).join(",")}}`}::int[], ${`{${minutes.join(",")}}`}::float8[]) as v(case_id, minutes)
       where o.case_id = v.case_id`);
   }
 }

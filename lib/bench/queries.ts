@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray, type SQL } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/db";
 import { groupBy } from "@/lib/group-by";
 import {
@@ -26,8 +26,9 @@ export interface BenchData {
 
 type FamilyStage = StageInfo & { id: number };
 
-async function stagesOf(conn: Db | Tx, where?: SQL): Promise<Map<number, FamilyStage[]>> {
-  const rows = await conn.select().from(assemblies).where(where).orderBy(asc(assemblies.familyId), asc(assemblies.position), asc(assemblies.id));
+/** The stages of the families given (all of them when none are), parents first, by family id. */
+export async function stagesByFamily(conn: Db | Tx = db, familyIds?: number[]): Promise<Map<number, FamilyStage[]>> {
+  const rows = await conn.select().from(assemblies).where(familyIds && inArray(assemblies.familyId, familyIds)).orderBy(asc(assemblies.familyId), asc(assemblies.position), asc(assemblies.id));
   const slugOf = new Map(rows.map((r) => [r.id, r.slug]));
   const byFamily = new Map<number, FamilyStage[]>();
   for (const [familyId, familyRows] of groupBy(rows, (r) => r.familyId)) {
@@ -41,12 +42,7 @@ async function stagesOf(conn: Db | Tx, where?: SQL): Promise<Map<number, FamilyS
 
 /** A family's stages, parents first. */
 export async function familyStages(familyId: number): Promise<FamilyStage[]> {
-  return (await stagesOf(db, eq(assemblies.familyId, familyId))).get(familyId) ?? [];
-}
-
-/** Every family's stages, parents first, by family id. */
-export function stagesByFamily(conn: Db | Tx = db): Promise<Map<number, FamilyStage[]>> {
-  return stagesOf(conn);
+  return (await stagesByFamily(db, [familyId])).get(familyId) ?? [];
 }
 
 /** Confirmed cause slugs of every closed case of the family. */
@@ -71,11 +67,11 @@ export async function causeCatalogue(conn: Db | Tx = db): Promise<CauseCatalogue
   return { causes: rows, partsOf };
 }
 
-/** Where each cause is inspected, by family id (all families, or the one given). */
-export async function causeLocationsByFamily(conn: Db | Tx = db, familyId?: number): Promise<Map<number, CauseLocation[]>> {
+/** Where each cause is inspected in the families given (all of them when none are), by family id. */
+export async function causeLocationsByFamily(conn: Db | Tx = db, familyIds?: number[]): Promise<Map<number, CauseLocation[]>> {
   const rows = await conn.select({ familyId: causeLocations.familyId, causeId: causeLocations.causeId, stage: assemblies.slug, inspectMinutes: causeLocations.inspectMinutes })
     .from(causeLocations).innerJoin(assemblies, eq(assemblies.id, causeLocations.assemblyId))
-    .where(familyId === undefined ? undefined : eq(causeLocations.familyId, familyId));
+    .where(familyIds && inArray(causeLocations.familyId, familyIds));
   const byFamily = new Map<number, CauseLocation[]>();
   for (const [family, familyRows] of groupBy(rows, (r) => r.familyId)) {
     byFamily.set(family, familyRows.map((r) => ({ causeId: r.causeId, stage: r.stage, inspectMinutes: r.inspectMinutes })));
@@ -85,7 +81,7 @@ export async function causeLocationsByFamily(conn: Db | Tx = db, familyId?: numb
 
 /** A family's described stages (none yet, perhaps) and its {@link FamilyBench}, read from the database. */
 export async function loadFamilyBench(familyId: number): Promise<{ described: FamilyStage[]; bench: FamilyBench }> {
-  const [described, catalogue, located] = await Promise.all([familyStages(familyId), causeCatalogue(), causeLocationsByFamily(db, familyId)]);
+  const [described, catalogue, located] = await Promise.all([familyStages(familyId), causeCatalogue(), causeLocationsByFamily(db, [familyId])]);
   return { described, bench: familyBench(described, catalogue, located.get(familyId) ?? []) };
 }
 

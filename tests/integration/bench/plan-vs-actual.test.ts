@@ -55,7 +55,10 @@ describe("plan against recorded labour (the reports page's bench section)", () =
 
   it("is the median expected teardown minutes of each case's bench plan against the median labour recorded", async () => {
     const rows = await planVsActual(await resolveScope(parseReportFilter({ ...PERIOD, family: "plan-test" })));
-    // Case 1, worked by hand with the bottom-up P-over-C plan: the housing cause first (open the
+    // Worked by hand: the order by bottom-up P-over-C (Ottosen & Jensen, "The cost of
+    // troubleshooting cost clusters with inside information", UAI 2010), its expected minutes as
+    // Σ P(reached) × minutes (Heckerman, Breese & Rommelse 1995).
+    // Case 1: the housing cause first (open the
     // housing, 20 + 5 = 25 min, always reached), then the gearbox cause (open the gearbox,
     // 10 + 4 = 14 min, reached with 1 − 0.6 = 0.4): 25 + 5.6 = 30.6.
     // Case 2: the gearbox cause first (20 + 10 + 4 = 34 min), then the housing cause (5 min,
