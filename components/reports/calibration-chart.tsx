@@ -1,6 +1,8 @@
-"use client";
-import { Bar, CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { COPPER, GRID, INK, INK_FAINT } from "./chart-colors";
+import { scaleBand, scaleLinear } from "@visx/scale";
+import { Bar, LinePath } from "@visx/shape";
+import { BottomAxis, Gridlines, LeftAxis } from "@/components/charts/axes";
+import { COPPER, INK } from "@/components/charts/colors";
+import { ChartFrame, plotArea } from "@/components/charts/frame";
 
 export interface CalibrationPoint {
   bin: string;
@@ -9,21 +11,26 @@ export interface CalibrationPoint {
   observed: number;
 }
 
+const pc = (v: number) => `${v.toFixed(1)} %`;
+
 /** Per bin of the top probability: how often the top cause was confirmed (bars) against what the tree said (line). */
 export function CalibrationChart({ points }: { points: CalibrationPoint[] }) {
+  const plot = plotArea(640, 300, { top: 12, right: 16, bottom: 28, left: 48 });
+  const x = scaleBand({ domain: points.map((p) => p.bin), range: [0, plot.innerWidth], padding: 0.2, round: true });
+  const y = scaleLinear({ domain: [0, 100], range: [plot.innerHeight, 0], round: true });
+  const centre = (p: CalibrationPoint) => (x(p.bin) ?? 0) + x.bandwidth() / 2;
   return (
-    <div role="img" aria-label="Calibration of the top-ranked cause; the table lists the same numbers" className="h-72 w-full">
-      <ResponsiveContainer width="100%" height="100%">
-        <ComposedChart data={points} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
-          <CartesianGrid stroke={GRID} vertical={false} />
-          <XAxis dataKey="bin" tick={{ fontSize: 11, fill: INK }} />
-          <YAxis unit=" %" domain={[0, 100]} tick={{ fontSize: 11, fill: INK_FAINT }} width={48} />
-          <Tooltip formatter={(value) => `${Number(value).toFixed(1)} %`} />
-          <Legend wrapperStyle={{ fontSize: 12 }} />
-          <Bar dataKey="observed" name="Top cause confirmed" fill={COPPER} isAnimationActive={false} />
-          <Line dataKey="predicted" name="Probability the tree gave it" stroke={INK} strokeWidth={2} strokeDasharray="5 3" isAnimationActive={false} />
-        </ComposedChart>
-      </ResponsiveContainer>
-    </div>
+    <ChartFrame plot={plot} label="Calibration of the top-ranked cause; the table lists the same numbers"
+      legend={[{ name: "Top cause confirmed", colour: COPPER, mark: "bar" }, { name: "Probability the tree gave it", colour: INK, mark: "dashed" }]}>
+      <Gridlines scale={y} plot={plot} />
+      {points.map((p) => (
+        <Bar key={p.bin} x={x(p.bin)} y={y(p.observed)} width={x.bandwidth()} height={plot.innerHeight - y(p.observed)} fill={COPPER}>
+          <title>{`Top probability ${p.bin} (n = ${p.n}): confirmed ${pc(p.observed)}, the tree gave ${pc(p.predicted)}`}</title>
+        </Bar>
+      ))}
+      <LinePath data={points} x={centre} y={(p) => y(p.predicted)} fill="none" stroke={INK} strokeWidth={2} strokeDasharray="5 3" />
+      <LeftAxis scale={y} plot={plot} format={(v) => `${v} %`} />
+      <BottomAxis scale={x} plot={plot} />
+    </ChartFrame>
   );
 }

@@ -1,6 +1,9 @@
-"use client";
-import { Bar, CartesianGrid, ComposedChart, ErrorBar, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { COPPER, GRID, INK, INK_FAINT } from "./chart-colors";
+import { curveMonotoneX } from "@visx/curve";
+import { scaleBand, scaleLinear } from "@visx/scale";
+import { Bar, Line, LinePath } from "@visx/shape";
+import { BottomAxis, Gridlines, LeftAxis, RightAxis } from "@/components/charts/axes";
+import { COPPER, INK } from "@/components/charts/colors";
+import { ChartFrame, plotArea } from "@/components/charts/frame";
 
 export interface ParetoPoint {
   rank: number;
@@ -13,27 +16,34 @@ export interface ParetoPoint {
 }
 
 const short = (s: string) => (s.length > 22 ? `${s.slice(0, 21)}…` : s);
+const pc = (v: number) => `${v.toFixed(1)} %`;
 
 /** Share of closed cases per cause with its interval (bars, left axis), and the cumulative share (line, right axis). */
 export function ParetoChart({ points }: { points: ParetoPoint[] }) {
+  const plot = plotArea(760, 380, { top: 12, right: 52, bottom: 120, left: 100 });
+  const x = scaleBand({ domain: points.map((p) => p.rank), range: [0, plot.innerWidth], padding: 0.2, round: true });
+  const share = scaleLinear({ domain: [0, Math.max(1, ...points.map((p) => p.share + p.error[1]))], range: [plot.innerHeight, 0], nice: true, round: true });
+  const cumulative = scaleLinear({ domain: [0, 100], range: [plot.innerHeight, 0], round: true });
+  const centre = (p: ParetoPoint) => (x(p.rank) ?? 0) + x.bandwidth() / 2;
+  const nameOf = new Map(points.map((p) => [p.rank, p.name]));
   return (
-    <div role="img" aria-label="Pareto chart of confirmed causes; the table lists the same numbers" className="h-80 w-full">
-      <ResponsiveContainer width="100%" height="100%">
-        <ComposedChart data={points} margin={{ top: 8, right: 8, bottom: 8, left: 36 }}>
-          <CartesianGrid stroke={GRID} vertical={false} />
-          <XAxis dataKey="name" tickFormatter={short} angle={-35} textAnchor="end" height={110} interval={0} tick={{ fontSize: 11, fill: INK }} />
-          <YAxis yAxisId="share" unit=" %" domain={[0, "auto"]} tick={{ fontSize: 11, fill: INK_FAINT }} width={48} />
-          <YAxis yAxisId="cumulative" orientation="right" unit=" %" domain={[0, 100]} tick={{ fontSize: 11, fill: INK_FAINT }} width={48} />
-          <Tooltip
-            formatter={(value, name) => [`${Number(value).toFixed(1)} %`, name === "share" ? "Share of cases" : "Cumulative share"]}
-            labelFormatter={(label) => String(label)}
-          />
-          <Bar yAxisId="share" dataKey="share" name="share" fill={COPPER} isAnimationActive={false}>
-            <ErrorBar dataKey="error" width={4} stroke={INK} strokeWidth={1} direction="y" />
-          </Bar>
-          <Line yAxisId="cumulative" dataKey="cumulative" name="cumulative" stroke={INK} strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} type="monotone" />
-        </ComposedChart>
-      </ResponsiveContainer>
-    </div>
+    <ChartFrame plot={plot} label="Pareto chart of confirmed causes; the table lists the same numbers"
+      legend={[{ name: "Share of cases", colour: COPPER, mark: "bar" }, { name: "Cumulative share", colour: INK, mark: "line" }]}>
+      <Gridlines scale={share} plot={plot} />
+      {points.map((p) => (
+        <g key={p.rank}>
+          <title>{`${p.name}: ${pc(p.share)} of cases (n = ${p.n}), 95 % interval ${pc(p.share - p.error[0])}–${pc(p.share + p.error[1])}; cumulative ${pc(p.cumulative)}`}</title>
+          <Bar x={x(p.rank)} y={share(p.share)} width={x.bandwidth()} height={plot.innerHeight - share(p.share)} fill={COPPER} />
+          <Line from={{ x: centre(p), y: share(p.share - p.error[0]) }} to={{ x: centre(p), y: share(p.share + p.error[1]) }} stroke={INK} />
+          <Line from={{ x: centre(p) - 2, y: share(p.share + p.error[1]) }} to={{ x: centre(p) + 2, y: share(p.share + p.error[1]) }} stroke={INK} />
+          <Line from={{ x: centre(p) - 2, y: share(p.share - p.error[0]) }} to={{ x: centre(p) + 2, y: share(p.share - p.error[0]) }} stroke={INK} />
+        </g>
+      ))}
+      <LinePath data={points} x={centre} y={(p) => cumulative(p.cumulative)} curve={curveMonotoneX} fill="none" stroke={INK} strokeWidth={2} />
+      {points.map((p) => <circle key={p.rank} cx={centre(p)} cy={cumulative(p.cumulative)} r={2} fill={INK} />)}
+      <LeftAxis scale={share} plot={plot} format={(v) => `${v} %`} />
+      <RightAxis scale={cumulative} plot={plot} format={(v) => `${v} %`} />
+      <BottomAxis scale={x} plot={plot} angle={-35} format={(rank) => short(nameOf.get(rank) ?? "")} />
+    </ChartFrame>
   );
 }

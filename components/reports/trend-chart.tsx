@@ -1,25 +1,35 @@
-"use client";
-import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { GRID, INK, INK_FAINT, seriesColour } from "./chart-colors";
+import { scaleLinear, scalePoint } from "@visx/scale";
+import { LinePath } from "@visx/shape";
+import { BottomAxis, Gridlines, LeftAxis } from "@/components/charts/axes";
+import { seriesColour } from "@/components/charts/colors";
+import { ChartFrame, plotArea } from "@/components/charts/frame";
+import { spacedLabels, wholeTicks } from "@/components/charts/ticks";
 
-export function TrendChart({ months, series }: {
-  months: ({ label: string } & Record<string, number | string>)[];
-  series: { key: string; name: string }[];
-}) {
+type Month = { label: string } & Record<string, number | string>;
+const count = (m: Month, key: string) => Number(m[key] ?? 0);
+
+/** Closed cases per month, one line per cause. */
+export function TrendChart({ months, series }: { months: Month[]; series: { key: string; name: string }[] }) {
+  const plot = plotArea(720, 300, { top: 12, right: 16, bottom: 28, left: 40 });
+  const x = scalePoint({ domain: months.map((m) => m.label), range: [0, plot.innerWidth], padding: 0.5, round: true });
+  const ticks = wholeTicks(Math.max(0, ...months.flatMap((m) => series.map((s) => count(m, s.key)))));
+  const y = scaleLinear({ domain: [0, ticks.at(-1)!], range: [plot.innerHeight, 0], round: true });
   return (
-    <div role="img" aria-label="Closed cases per month by cause; the table lists the same numbers" className="h-80 w-full">
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={months} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
-          <CartesianGrid stroke={GRID} vertical={false} />
-          <XAxis dataKey="label" tick={{ fontSize: 11, fill: INK }} />
-          <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: INK_FAINT }} width={40} />
-          <Tooltip />
-          <Legend wrapperStyle={{ fontSize: 12 }} />
-          {series.map((s, i) => (
-            <Line key={s.key} dataKey={s.key} name={s.name} stroke={seriesColour(i)} strokeWidth={2} dot={false} isAnimationActive={false} type="linear" />
+    <ChartFrame plot={plot} label="Closed cases per month by cause; the table lists the same numbers"
+      legend={series.map((s, i) => ({ name: s.name, colour: seriesColour(i), mark: "line" }))}>
+      <Gridlines scale={y} plot={plot} ticks={ticks} />
+      {series.map((s, i) => (
+        <g key={s.key}>
+          <LinePath data={months} x={(m) => x(m.label) ?? 0} y={(m) => y(count(m, s.key))} fill="none" stroke={seriesColour(i)} strokeWidth={2} />
+          {months.map((m) => (
+            <circle key={m.label} cx={x(m.label)} cy={y(count(m, s.key))} r={5} fill="transparent">
+              <title>{`${m.label}, ${s.name}: ${count(m, s.key)}`}</title>
+            </circle>
           ))}
-        </LineChart>
-      </ResponsiveContainer>
-    </div>
+        </g>
+      ))}
+      <LeftAxis scale={y} plot={plot} ticks={ticks} />
+      <BottomAxis scale={x} plot={plot} ticks={spacedLabels(months.map((m) => m.label), 12)} />
+    </ChartFrame>
   );
 }

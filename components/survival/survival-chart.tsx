@@ -1,6 +1,9 @@
-"use client";
-import { Area, CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { COPPER, GRID, INK, INK_FAINT, MOSS } from "@/components/reports/chart-colors";
+import { curveStepAfter } from "@visx/curve";
+import { scaleLinear } from "@visx/scale";
+import { Area, LinePath } from "@visx/shape";
+import { BottomAxis, Gridlines, LeftAxis } from "@/components/charts/axes";
+import { COPPER, MOSS } from "@/components/charts/colors";
+import { ChartFrame, plotArea } from "@/components/charts/frame";
 import { percent } from "@/lib/format";
 
 export interface CurvePoint {
@@ -17,30 +20,34 @@ export interface Curve {
 }
 
 const COLOURS = [MOSS, COPPER];
+const MONTH_TICKS = [0, 3, 6, 9, 12, 18, 24, 30, 36];
 
-/** Return-free survival as step lines with their 95 % bands; the tables beside it hold the same numbers. */
+/**
+ * Return-free survival as step lines with their 95 % bands. The numbers (at 3, 6 and 12 months, and
+ * at risk) are in the tables beside it, so the steps carry no hover text of their own: a curve has
+ * hundreds of them and each would be sent with the page.
+ */
 export function SurvivalChart({ curves, months, label }: { curves: Curve[]; months: number; label: string }) {
+  const plot = plotArea(560, 260, { top: 12, right: 16, bottom: 28, left: 48 });
+  const x = scaleLinear({ domain: [0, months], range: [0, plot.innerWidth], round: true });
+  const y = scaleLinear({ domain: [0, 1], range: [plot.innerHeight, 0], round: true });
+  const colour = (i: number) => COLOURS[i % COLOURS.length];
   return (
-    <div role="img" aria-label={label} className="h-64 w-full">
-      <ResponsiveContainer width="100%" height="100%">
-        <ComposedChart margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
-          <CartesianGrid stroke={GRID} />
-          <XAxis type="number" dataKey="t" domain={[0, months]} ticks={[0, 3, 6, 9, 12, 18, 24, 30, 36].filter((m) => m <= months)}
-            tick={{ fontSize: 11, fill: INK }} unit=" mo" allowDuplicatedCategory={false} />
-          <YAxis domain={[0, 1]} tickFormatter={percent} tick={{ fontSize: 11, fill: INK_FAINT }} width={52} />
-          <Tooltip formatter={(v) => (Array.isArray(v) ? v.map((x) => percent(Number(x))).join("–") : percent(Number(v)))}
-            labelFormatter={(t) => `${Number(t).toFixed(1)} months`} />
-          <Legend wrapperStyle={{ fontSize: 12 }} />
-          {curves.map((c, i) => (
-            <Area key={`${c.key}-band`} data={c.points} dataKey="band" name={`${c.name}, 95 % band`} type="stepAfter"
-              stroke="none" fill={COLOURS[i % 2]} fillOpacity={0.15} isAnimationActive={false} legendType="none" />
-          ))}
-          {curves.map((c, i) => (
-            <Line key={c.key} data={c.points} dataKey="s" name={c.name} type="stepAfter" stroke={COLOURS[i % 2]}
-              strokeWidth={2} dot={false} isAnimationActive={false} />
-          ))}
-        </ComposedChart>
-      </ResponsiveContainer>
-    </div>
+    <ChartFrame plot={plot} label={label}
+      legend={curves.map((c, i) => ({ name: c.name, colour: colour(i), mark: "line" as const }))}>
+      <Gridlines scale={y} plot={plot} />
+      {curves.map((c, i) => (
+        <Area key={`${c.key}-band`} data={c.points} x={(p) => x(p.t)} y0={(p) => y(p.band[0])} y1={(p) => y(p.band[1])}
+          curve={curveStepAfter} fill={colour(i)} fillOpacity={0.15} />
+      ))}
+      {curves.map((c, i) => (
+        <g key={c.key}>
+          <title>{c.name}</title>
+          <LinePath data={c.points} x={(p) => x(p.t)} y={(p) => y(p.s)} curve={curveStepAfter} fill="none" stroke={colour(i)} strokeWidth={2} />
+        </g>
+      ))}
+      <LeftAxis scale={y} plot={plot} format={(v) => percent(Number(v))} />
+      <BottomAxis scale={x} plot={plot} ticks={MONTH_TICKS.filter((m) => m <= months)} format={(v) => `${v} mo`} />
+    </ChartFrame>
   );
 }

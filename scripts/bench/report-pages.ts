@@ -1,9 +1,11 @@
 // The reports pages as the shop lead opens them (`npm run bench report-pages`): headless Chromium
 // against the production build, signed in on the demo data. Each page is loaded BENCH_LOADS times
-// (after warm-up loads), the pages taken in turn so that all see the same machine load; the time is
-// navigation start → load event end (Navigation Timing). Beside them, in the same run and taken in
-// the same turns, the floor: the signed-in account page (the same shell and session check, one
-// small query). Budget: every reports page ≤ 300 ms at p95.
+// (after warm-up loads), the pages taken in turn so that all see the same machine load. Two times
+// from navigation start: the load event's end (Navigation Timing), and "shown": the later of that
+// and the last mark added inside a chart (a chart drawn by script after the load event, as one that
+// measures its container first is, would otherwise look done before the lead can see it). Beside
+// them, in the same run and taken in the same turns, the floor: the signed-in account page (the same
+// shell and session check, one small query). Budget: every reports page shown ≤ 300 ms at p95.
 import { eq } from "drizzle-orm";
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
@@ -34,7 +36,22 @@ function reportPages(): string[] {
   return found.sort();
 }
 
-async function loadTime(page: Page, url: string): Promise<number> {
+/** In every page, before its own scripts: the time of the last node added inside a chart (an element with role img). */
+function watchChartMarks() {
+  const marks = window as unknown as { lastChartMark?: number };
+  new MutationObserver((records) => {
+    for (const record of records) {
+      for (const node of record.addedNodes) {
+        if (node instanceof Element && node.closest("[role=img]")) { marks.lastChartMark = performance.now(); return; }
+      }
+    }
+  }).observe(document, { childList: true, subtree: true });
+}
+
+/** Long enough after the load event for a chart that waits on a measurement of its box to have drawn. */
+const SETTLE_MS = 400;
+
+async function loadTime(page: Page, url: string): Promise<{ load: number; shown: number }> {
   // Each load starts from a blank page, after a pause, so the last page's teardown is not in it.
   await page.goto("about:blank");
   await page.waitForTimeout(100);
@@ -42,9 +59,11 @@ async function loadTime(page: Page, url: string): Promise<number> {
   if (!response?.ok() || new URL(page.url()).pathname !== url.split("?")[0]) {
     throw new Error(`${url} answered ${response?.status()} at ${page.url()}; is the lead signed in?`);
   }
+  await page.waitForTimeout(SETTLE_MS);
   return page.evaluate(() => {
     const [nav] = performance.getEntriesByType("navigation") as PerformanceNavigationTiming[];
-    return nav.loadEventEnd - nav.startTime;
+    const lastChartMark = (window as unknown as { lastChartMark?: number }).lastChartMark ?? 0;
+    return { load: nav.loadEventEnd - nav.startTime, shown: Math.max(nav.loadEventEnd, lastChartMark) - nav.startTime };
   });
 }
 
@@ -72,10 +91,11 @@ async function main() {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium", headless: true,
     args: ["--headless", "--disable-gpu", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-sandbox"],
   });
-  const times = new Map<string, number[]>(urls.map((u) => [u, []]));
+  const times = new Map<string, { load: number; shown: number }[]>(urls.map((u) => [u, []]));
   try {
     const context = await browser.newContext({ viewport: { width: 1360, height: 900 } });
     await context.addCookies([{ name: "rb_session", value: token, url: BASE }]);
+    await context.addInitScript(watchChartMarks);
     const page = await context.newPage();
     for (let round = 0; round < WARMUP + LOADS; round++) {
       for (const url of urls) {
@@ -88,12 +108,16 @@ async function main() {
   }
 
   console.log(`\nreports pages, Chromium against the production build, signed in as the shop lead on the demo data; ${LOADS} loads each`);
-  console.log(`${"page".padEnd(44)}${"median".padStart(8)}${"p95".padStart(9)}   (ms, navigation start to load event end)`);
+  console.log("ms from navigation start: to the load event's end, and to shown (load event and every chart drawn)");
+  console.log(`${"page".padEnd(44)}${"load median".padStart(12)}${"p95".padStart(8)}${"shown median".padStart(14)}${"p95".padStart(8)}`);
   for (const url of urls) {
-    const values = times.get(url)!;
-    const p95 = quantile(values, 0.95);
+    const runs = times.get(url)!;
+    const load = runs.map((r) => r.load);
+    const shown = runs.map((r) => r.shown);
+    const p95 = quantile(shown, 0.95);
     const verdict = url === FLOOR ? "  floor: signed-in account page" : p95 <= BUDGET_MS ? `  within ${BUDGET_MS} ms` : `  OVER ${BUDGET_MS} ms`;
-    console.log(`${url.padEnd(44)}${quantile(values, 0.5).toFixed(1).padStart(8)}${p95.toFixed(1).padStart(9)}${verdict}`);
+    console.log(`${url.padEnd(44)}${quantile(load, 0.5).toFixed(1).padStart(12)}${quantile(load, 0.95).toFixed(1).padStart(8)}` +
+      `${quantile(shown, 0.5).toFixed(1).padStart(14)}${p95.toFixed(1).padStart(8)}${verdict}`);
   }
 }
 

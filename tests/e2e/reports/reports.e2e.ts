@@ -25,6 +25,9 @@ describe("the shop lead's reports", () => {
     const reports = new ReportPage(browser.page);
     await reports.open();
     expect(await reports.paretoRows().count()).toBeGreaterThan(3);
+    // The charts arrive drawn with the page: the Pareto chart has a bar per charted cause (at most 15).
+    const pareto = browser.page.getByRole("img", { name: /Pareto chart of confirmed causes/ });
+    expect(await pareto.locator("rect.visx-bar").count()).toBe(Math.min(15, await reports.paretoRows().count()));
     await browser.page.getByTestId("accuracy-table").waitFor();
     await browser.page.getByTestId("calibration-table").waitFor();
     await screenshot(browser.page, "reports-last-12-months");

@@ -42,7 +42,10 @@ describe("does the repair last?", () => {
     const clutch = lasting.comparison("uprated-clutch");
     expect(await clutch.getByTestId("p-value").textContent()).toMatch(/^p (=|<) 0\.\d+$/);
     expect(await clutch.getByTestId("verdict").textContent()).toMatch(/(less|more) often|No difference shown|Too early to tell/);
-    await clutch.locator(".recharts-surface").first().waitFor();
+    // Both arms drawn as step lines with the page, each named with its number of units.
+    const curves = clutch.getByTestId("chart");
+    expect(await curves.locator("path.visx-linepath").count()).toBe(2);
+    expect(await curves.locator("title").allTextContents()).toEqual([expect.stringMatching(/^Fitted \(n = \d+\)$/), expect.stringMatching(/^Not fitted \(n = \d+\)$/)]);
     expect(await clutch.getByTestId("checkpoints").locator("tbody tr").count()).toBe(2);
     const header = await clutch.getByTestId("checkpoints").locator("thead").textContent();
     expect(header).toMatch(/3 months.*6 months.*12 months/);
