@@ -22,7 +22,7 @@ export function ComparisonCard({ comparison, months }: { comparison: UpgradeComp
     { key: "not-fitted", name: "Not fitted", arm: notFitted },
   ];
   return (
-    <Panel title={upgrade.name} className="drawn-when-near flex flex-col gap-3">
+    <Panel title={upgrade.name} className="flex flex-col gap-3">
       <div data-testid="comparison" data-upgrade={upgrade.slug} data-verdict={verdict.kind} className="flex flex-col gap-3">
         <p className="text-sm text-ink-soft">
           Repairs of {groupLabel(comparison.group)} faults; the curve is the share not back for a fault of that kind.

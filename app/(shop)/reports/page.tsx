@@ -42,17 +42,17 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         importHref={may(user.role, "reports:import") ? "/reports/import" : null}
       />
       <ParetoSection pareto={report.pareto} />
-      <div className="drawn-when-near"><TrendSection trend={report.trend} period={filter.period} /></div>
-      <div className="drawn-when-near">
-        <AccuracySection
-          accuracy={report.accuracy}
-          selectedVersionId={Number.isSafeInteger(version) ? version : null}
-          linkFor={(id) => `/reports?${query}&version=${id}#calibration`}
-        />
+      <TrendSection trend={report.trend} period={filter.period} />
+      <AccuracySection
+        accuracy={report.accuracy}
+        selectedVersionId={Number.isSafeInteger(version) ? version : null}
+        linkFor={(id) => `/reports?${query}&version=${id}#calibration`}
+      />
+      <div className="grid gap-6">
+        <PartsSection demand={report.parts} period={filter.period} />
+        <RepeatSection repeats={report.repeats} />
+        <PlanVsActualSection rows={report.benchPlans} />
       </div>
-      <div className="drawn-when-near"><PartsSection demand={report.parts} period={filter.period} /></div>
-      <div className="drawn-when-near"><RepeatSection repeats={report.repeats} /></div>
-      <div className="drawn-when-near"><PlanVsActualSection rows={report.benchPlans} /></div>
     </div>
   );
 }
