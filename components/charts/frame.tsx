@@ -9,12 +9,11 @@ export function plotArea(width: number, height: number, margin: Margin): Plot {
   return { width, height, margin, innerWidth: width - margin.left - margin.right, innerHeight: height - margin.top - margin.bottom };
 }
 
-export type LegendMark = "bar" | "line" | "dashed" | "band";
+export type LegendMark = "bar" | "line" | "dashed";
 export interface LegendItem { name: string; colour: string; mark: LegendMark }
 
 const MARK_STYLE: Record<LegendMark, (colour: string) => React.CSSProperties> = {
   bar: (c) => ({ background: c, width: 10, height: 10 }),
-  band: (c) => ({ background: c, opacity: 0.25, width: 14, height: 10 }),
   line: (c) => ({ borderTop: `2px solid ${c}`, width: 16 }),
   dashed: (c) => ({ borderTop: `2px dashed ${c}`, width: 16 }),
 };

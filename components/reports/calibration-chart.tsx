@@ -3,6 +3,7 @@ import { Bar, LinePath } from "@visx/shape";
 import { BottomAxis, Gridlines, LeftAxis } from "@/components/charts/axes";
 import { COPPER, INK } from "@/components/charts/colors";
 import { ChartFrame, plotArea } from "@/components/charts/frame";
+import { pct } from "@/lib/format";
 
 export interface CalibrationPoint {
   bin: string;
@@ -11,7 +12,8 @@ export interface CalibrationPoint {
   observed: number;
 }
 
-const pc = (v: number) => `${v.toFixed(1)} %`;
+/** The chart's values are in percent; the shared formatter takes shares. */
+const pc = (v: number) => pct(v / 100);
 
 /** Per bin of the top probability: how often the top cause was confirmed (bars) against what the tree said (line). */
 export function CalibrationChart({ points }: { points: CalibrationPoint[] }) {
@@ -29,7 +31,7 @@ export function CalibrationChart({ points }: { points: CalibrationPoint[] }) {
         </Bar>
       ))}
       <LinePath data={points} x={centre} y={(p) => y(p.predicted)} fill="none" stroke={INK} strokeWidth={2} strokeDasharray="5 3" />
-      <LeftAxis scale={y} plot={plot} format={(v) => `${v} %`} />
+      <LeftAxis scale={y} plot={plot} format={(v) => pct(Number(v) / 100, 0)} />
       <BottomAxis scale={x} plot={plot} />
     </ChartFrame>
   );

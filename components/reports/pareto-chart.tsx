@@ -4,6 +4,7 @@ import { Bar, Line, LinePath } from "@visx/shape";
 import { BottomAxis, Gridlines, LeftAxis, RightAxis } from "@/components/charts/axes";
 import { COPPER, INK } from "@/components/charts/colors";
 import { ChartFrame, plotArea } from "@/components/charts/frame";
+import { pct } from "@/lib/format";
 
 export interface ParetoPoint {
   rank: number;
@@ -16,7 +17,8 @@ export interface ParetoPoint {
 }
 
 const short = (s: string) => (s.length > 22 ? `${s.slice(0, 21)}…` : s);
-const pc = (v: number) => `${v.toFixed(1)} %`;
+/** The chart's values are in percent; the shared formatter takes shares. */
+const pc = (v: number) => pct(v / 100);
 
 /** Share of closed cases per cause with its interval (bars, left axis), and the cumulative share (line, right axis). */
 export function ParetoChart({ points }: { points: ParetoPoint[] }) {
@@ -41,8 +43,8 @@ export function ParetoChart({ points }: { points: ParetoPoint[] }) {
       ))}
       <LinePath data={points} x={centre} y={(p) => cumulative(p.cumulative)} curve={curveMonotoneX} fill="none" stroke={INK} strokeWidth={2} />
       {points.map((p) => <circle key={p.rank} cx={centre(p)} cy={cumulative(p.cumulative)} r={2} fill={INK} />)}
-      <LeftAxis scale={share} plot={plot} format={(v) => `${v} %`} />
-      <RightAxis scale={cumulative} plot={plot} format={(v) => `${v} %`} />
+      <LeftAxis scale={share} plot={plot} format={(v) => pct(Number(v) / 100, 0)} />
+      <RightAxis scale={cumulative} plot={plot} format={(v) => pct(Number(v) / 100, 0)} />
       <BottomAxis scale={x} plot={plot} angle={-35} format={(rank) => short(nameOf.get(rank) ?? "")} />
     </ChartFrame>
   );

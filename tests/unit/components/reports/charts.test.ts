@@ -5,6 +5,7 @@ import { ParetoChart, type ParetoPoint } from "@/components/reports/pareto-chart
 import { PartsChart } from "@/components/reports/parts-chart";
 import { TrendChart } from "@/components/reports/trend-chart";
 import { CalibrationChart } from "@/components/reports/calibration-chart";
+import { pct } from "@/lib/format";
 
 const svgOf = (html: string) => new ChartMarkup(html);
 
@@ -38,8 +39,8 @@ describe("ParetoChart", () => {
 
   it("names each cause with its share, count and interval on hover", () => {
     expect(chart.titles()).toEqual([
-      "Worn one-way clutch: 50.0 % of cases (n = 50), 95 % interval 41.0 %–59.0 %; cumulative 50.0 %",
-      "Water in the torque sensor: 25.0 % of cases (n = 25), 95 % interval 18.0 %–33.0 %; cumulative 75.0 %",
+      `Worn one-way clutch: ${pct(0.5)} of cases (n = 50), 95 % interval ${pct(0.41)}–${pct(0.59)}; cumulative ${pct(0.5)}`,
+      `Water in the torque sensor: ${pct(0.25)} of cases (n = 25), 95 % interval ${pct(0.18)}–${pct(0.33)}; cumulative ${pct(0.75)}`,
     ]);
   });
 
@@ -91,6 +92,6 @@ describe("CalibrationChart", () => {
   it("draws the confirmed share as bars on a 0–100 % axis", () => {
     const [low, high] = chart.rects();
     expect(high.height / low.height).toBeCloseTo(4, 6);
-    expect(chart.titles()[1]).toBe("Top probability 50–100 % (n = 30): confirmed 80.0 %, the tree gave 80.0 %");
+    expect(chart.titles()[1]).toBe(`Top probability 50–100 % (n = 30): confirmed ${pct(0.8)}, the tree gave ${pct(0.8)}`);
   });
 });
