@@ -1,5 +1,5 @@
 "use client";
-import { useEffect, useRef } from "react";
+import { useEffect, useLayoutEffect, useRef } from "react";
 
 export interface AnswerKeys {
   /** Called with 0 for key 1, 1 for key 2, … up to key 9. */
@@ -16,7 +16,10 @@ function typingInto(target: EventTarget | null): boolean {
 /** Number keys 1–9 answer, S skips, U undoes; never while typing in a field or with a modifier held. */
 export function useAnswerKeys(keys: AnswerKeys): void {
   const latest = useRef(keys);
-  useEffect(() => {
+  // Updated as the render is committed, before the browser handles another key: a passive effect
+  // runs after paint, and a key pressed in between reached the previous render's handlers (an
+  // answer pressed just after the last one was confirmed was dropped as "still pending").
+  useLayoutEffect(() => {
     latest.current = keys;
   });
   useEffect(() => {

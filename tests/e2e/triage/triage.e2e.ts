@@ -128,6 +128,40 @@ describe("phone triage, end to end", () => {
     await shot(page, "triage-outbox");
   });
 
+  it("a key pressed the moment an answer is confirmed is taken, not dropped as still pending", async () => {
+    const { page } = browser;
+    await page.context().clearCookies();
+    const signIn = new SignInPage(page);
+    await signIn.open();
+    await signIn.signIn("tech@rootbench.test");
+    await page.getByTestId("home-tech").waitFor();
+    const form = new TriageNewPage(page);
+    await form.open();
+    await form.fill({
+      callerName: "Ines Varda", phone: "+00 555 0199 4412", email: "", family: "Orvanta Tessel Gen 2",
+      serial: "", ridingUse: "road", symptom: "Pedals slip or no drive", words: "slips under load",
+    });
+    await form.start();
+    await page.waitForURL(/\/triage\/\d+$/);
+    const walk = new TriageWalkPage(page);
+    await walk.ready();
+    await walk.waitForQuestion("q-what");
+    // The second key goes in from inside the commit that confirms the first answer (a mutation
+    // observer runs before the browser paints), the earliest a fast typist's key can arrive.
+    await page.evaluate(() => {
+      const screen = document.querySelector("[data-testid=walk-screen]")!;
+      let sent = false;
+      new MutationObserver(() => {
+        if (sent || screen.getAttribute("data-pending") !== "no" || !document.querySelector("[data-testid=trail-step][data-confirmed=yes]")) return;
+        sent = true;
+        window.dispatchEvent(new KeyboardEvent("keydown", { key: "1", bubbles: true }));
+      }).observe(screen, { attributes: true, attributeFilter: ["data-pending"] });
+    });
+    await walk.answerWithKey("Pedals spin forward");
+    await walk.waitForConfirmedSteps(2);
+    expect(await page.getByTestId("walk-error").count()).toBe(0);
+  });
+
   it("the browser saw no errors", () => {
     expect(realErrors(browser.errors)).toEqual([]);
   });
