@@ -64,8 +64,14 @@ describe.each(ALL_ROLES)("WCAG 2.1 AA sweep as %s", (role) => {
 });
 
 // A resize reaches React through ResizeObserver and media queries: let two frames pass.
-function afterLayout(page: Browser["page"]): Promise<void> {
-  return page.evaluate(() => new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => done()))));
+// Bounded: a renderer that stops producing frames fails this screen in seconds with its name,
+// instead of holding the whole sweep until the test's timeout.
+async function afterLayout(page: Browser["page"]): Promise<void> {
+  const framed = await page.evaluate(() => new Promise<boolean>((done) => {
+    const timer = setTimeout(() => done(false), 5000);
+    requestAnimationFrame(() => requestAnimationFrame(() => { clearTimeout(timer); done(true); }));
+  }));
+  if (!framed) throw new Error(`${page.url()} drew no frame within 5 s`);
 }
 
 // The header is one row: its content never needs more width than the row has, and it is one line tall.
