@@ -37,6 +37,14 @@ describe("ParetoChart", () => {
     expect(first.y + first.height).toBeCloseTo(second.y + second.height, 6);
   });
 
+  it("writes each tick label as one text, the causes' names tilted about their own tick", () => {
+    expect(chart.count("svg")).toBe(1);
+    expect(chart.count("tspan")).toBe(0);
+    const tilted = [...chart.markup.matchAll(/<text x="([\d.-]+)" y="([\d.-]+)"[^>]*transform="rotate\(-?\d+, ([\d.-]+), ([\d.-]+)\)"[^>]*>([^<]*)</g)];
+    expect(tilted.map((m) => m[5])).toEqual(["Worn one-way clutch", "Water in the torque s…"]);
+    for (const [, x, y, cx, cy] of tilted) expect([cx, cy]).toEqual([x, y]);
+  });
+
   it("names each cause with its share, count and interval on hover", () => {
     expect(chart.titles()).toEqual([
       `Worn one-way clutch: ${pct(0.5)} of cases (n = 50), 95 % interval ${pct(0.41)}–${pct(0.59)}; cumulative ${pct(0.5)}`,
