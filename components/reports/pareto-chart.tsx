@@ -1,6 +1,6 @@
 import { curveMonotoneX } from "@visx/curve";
 import { scaleBand, scaleLinear } from "@visx/scale";
-import { Bar, Line, LinePath } from "@visx/shape";
+import { Bar, LinePath } from "@visx/shape";
 import { BottomAxis, Gridlines, LeftAxis, RightAxis } from "@/components/charts/axes";
 import { COPPER, INK } from "@/components/charts/colors";
 import { ChartFrame, plotArea } from "@/components/charts/frame";
@@ -16,6 +16,8 @@ export interface ParetoPoint {
   cumulative: number;
 }
 
+/** The 95 % interval as one path: the upright from `low` to `high` and a 4-unit cap at each end. */
+const whisker = (x: number, low: number, high: number) => `M${x},${low}V${high}M${x - 2},${high}H${x + 2}M${x - 2},${low}H${x + 2}`;
 const short = (s: string) => (s.length > 22 ? `${s.slice(0, 21)}…` : s);
 /** The chart's values are in percent; the shared formatter takes shares. */
 const pc = (v: number) => pct(v / 100);
@@ -36,9 +38,7 @@ export function ParetoChart({ points }: { points: ParetoPoint[] }) {
         <g key={p.rank}>
           <title>{`${p.name}: ${pc(p.share)} of cases (n = ${p.n}), 95 % interval ${pc(p.share - p.error[0])}–${pc(p.share + p.error[1])}; cumulative ${pc(p.cumulative)}`}</title>
           <Bar x={x(p.rank)} y={share(p.share)} width={x.bandwidth()} height={plot.innerHeight - share(p.share)} fill={COPPER} />
-          <Line from={{ x: centre(p), y: share(p.share - p.error[0]) }} to={{ x: centre(p), y: share(p.share + p.error[1]) }} stroke={INK} />
-          <Line from={{ x: centre(p) - 2, y: share(p.share + p.error[1]) }} to={{ x: centre(p) + 2, y: share(p.share + p.error[1]) }} stroke={INK} />
-          <Line from={{ x: centre(p) - 2, y: share(p.share - p.error[0]) }} to={{ x: centre(p) + 2, y: share(p.share - p.error[0]) }} stroke={INK} />
+          <path className="whisker" d={whisker(centre(p), share(p.share - p.error[0]), share(p.share + p.error[1]))} fill="none" stroke={INK} shapeRendering="crispEdges" />
         </g>
       ))}
       <LinePath data={points} x={centre} y={(p) => cumulative(p.cumulative)} curve={curveMonotoneX} fill="none" stroke={INK} strokeWidth={2} />

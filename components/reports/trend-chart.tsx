@@ -19,14 +19,14 @@ export function TrendChart({ months, series }: { months: Month[]; series: { key:
       legend={series.map((s, i) => ({ name: s.name, colour: seriesColour(i), mark: "line" }))}>
       <Gridlines scale={y} plot={plot} ticks={ticks} />
       {series.map((s, i) => (
-        <g key={s.key}>
-          <LinePath data={months} x={(m) => x(m.label) ?? 0} y={(m) => y(count(m, s.key))} fill="none" stroke={seriesColour(i)} strokeWidth={2} />
-          {months.map((m) => (
-            <circle key={m.label} cx={x(m.label)} cy={y(count(m, s.key))} r={5} fill="transparent">
-              <title>{`${m.label}, ${s.name}: ${count(m, s.key)}`}</title>
-            </circle>
-          ))}
-        </g>
+        <LinePath key={s.key} data={months} x={(m) => x(m.label) ?? 0} y={(m) => y(count(m, s.key))} fill="none" stroke={seriesColour(i)} strokeWidth={2} />
+      ))}
+      {/* One hover column per month, naming every cause's count in it: easier to hit than a point on
+          a line, and a month's causes read side by side. */}
+      {months.map((m) => (
+        <rect key={m.label} x={(x(m.label) ?? 0) - x.step() / 2} y={0} width={x.step()} height={plot.innerHeight} fill="transparent">
+          <title>{`${m.label}: ${series.map((s) => `${s.name} ${count(m, s.key)}`).join(", ")}`}</title>
+        </rect>
       ))}
       <LeftAxis scale={y} plot={plot} ticks={ticks} />
       <BottomAxis scale={x} plot={plot} ticks={spacedLabels(months.map((m) => m.label), 12)} />

@@ -45,6 +45,18 @@ describe("ParetoChart", () => {
     for (const [, x, y, cx, cy] of tilted) expect([cx, cy]).toEqual([x, y]);
   });
 
+  it("draws each 95 % interval as a whisker through the top of its bar", () => {
+    const whiskers = [...chart.markup.matchAll(/class="whisker" d="M([\d.-]+),([\d.-]+)V([\d.-]+)/g)].map((m) => ({ x: Number(m[1]), low: Number(m[2]), high: Number(m[3]) }));
+    expect(whiskers).toHaveLength(2);
+    chart.rects().forEach((bar, i) => {
+      expect(whiskers[i].x).toBeCloseTo(bar.x + bar.width / 2, 6);
+      expect(whiskers[i].low).toBeGreaterThan(bar.y);
+      expect(whiskers[i].high).toBeLessThan(bar.y);
+    });
+    // 50 % ± 9: as far above the bar's top as below it, to the unit the chart rounds to.
+    expect(Math.abs((whiskers[0].low - chart.rects()[0].y) - (chart.rects()[0].y - whiskers[0].high))).toBeLessThanOrEqual(1);
+  });
+
   it("names each cause with its share, count and interval on hover", () => {
     expect(chart.titles()).toEqual([
       `Worn one-way clutch: ${pct(0.5)} of cases (n = 50), 95 % interval ${pct(0.41)}–${pct(0.59)}; cumulative ${pct(0.5)}`,
@@ -79,10 +91,23 @@ describe("TrendChart", () => {
   const months = Array.from({ length: 24 }, (_, i) => ({ label: `M${i + 1}`, clutch: i % 3 }));
   const chart = svgOf(renderToStaticMarkup(createElement(TrendChart, { months, series: [{ key: "clutch", name: "Clutch wear" }] })));
 
-  it("draws one line per cause and a hover point per month", () => {
+  it("draws one line per cause and a hover column per month naming each cause's count", () => {
     expect(chart.count("path")).toBeGreaterThanOrEqual(1);
     expect(chart.titles()).toHaveLength(24);
-    expect(chart.titles()[4]).toBe("M5, Clutch wear: 1");
+    expect(chart.titles()[4]).toBe("M5: Clutch wear 1");
+    const columns = chart.rects();
+    expect(columns).toHaveLength(24);
+    // Side by side with no gap or overlap, each as wide as a month's step.
+    for (let i = 1; i < columns.length; i++) expect(columns[i].x).toBeCloseTo(columns[i - 1].x + columns[i - 1].width, 6);
+  });
+
+  it("names every cause of a month in its hover text", () => {
+    const two = svgOf(renderToStaticMarkup(createElement(TrendChart, {
+      months: [{ label: "Jan 2026", clutch: 3, seal: 1 }, { label: "Feb 2026", clutch: 0, seal: 2 }],
+      series: [{ key: "clutch", name: "Clutch wear" }, { key: "seal", name: "Seal hardened" }],
+    })));
+    expect(two.titles()).toEqual(["Jan 2026: Clutch wear 3, Seal hardened 1", "Feb 2026: Clutch wear 0, Seal hardened 2"]);
+    expect(two.count("path")).toBe(2);
   });
 
   it("labels every second month when 24 do not fit", () => {
