@@ -6,9 +6,12 @@ export function CautionNotes({ cautions }: { cautions: ViewNode[] }) {
   return (
     <ul className="flex flex-col gap-2" data-testid="cautions">
       {cautions.map((c) => (
-        <li key={c.key} role="note" className="rounded-lg border-l-4 border-amber bg-amber-light p-4">
-          <p className="font-semibold">{c.title}</p>
-          <p className="mt-1 text-ink">{c.cautionText}</p>
+        <li key={c.key}>
+          {/* The note role sits inside the item: a list may hold only list items. */}
+          <div role="note" className="rounded-lg border-l-4 border-amber bg-amber-light p-4">
+            <p className="font-semibold">{c.title}</p>
+            <p className="mt-1 text-ink">{c.cautionText}</p>
+          </div>
         </li>
       ))}
     </ul>
