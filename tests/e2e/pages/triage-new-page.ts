@@ -35,4 +35,12 @@ export class TriageNewPage {
   async start(): Promise<void> {
     await this.page.getByRole("button", { name: "Start the walk" }).click();
   }
+
+  /** Opens the form, fills in the call, starts the walk and waits for its screen's address. */
+  async startCall(call: NewCall): Promise<void> {
+    await this.open();
+    await this.fill(call);
+    await this.start();
+    await this.page.waitForURL(/\/triage\/\d+$/);
+  }
 }

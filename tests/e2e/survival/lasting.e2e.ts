@@ -67,11 +67,7 @@ describe("does the repair last?", () => {
     await signIn.signIn("tech@rootbench.test");
     await page.getByTestId("home-tech").waitFor();
 
-    const form = new TriageNewPage(page);
-    await form.open();
-    await form.fill({ callerName: "Ines Varrow", phone: "+00 555 0142 7781", family: "Orvanta Tessel Gen 2", serial: "TS2-40417", ridingUse: "trail", symptom: "Pedals slip or no drive" });
-    await form.start();
-    await page.waitForURL(/\/triage\/\d+$/);
+    await new TriageNewPage(page).startCall({ callerName: "Ines Varrow", phone: "+00 555 0142 7781", family: "Orvanta Tessel Gen 2", serial: "TS2-40417", ridingUse: "trail", symptom: "Pedals slip or no drive" });
     const walk = new TriageWalkPage(page);
     await walk.ready();
     await walk.answerWithKey("Pedals spin forward");

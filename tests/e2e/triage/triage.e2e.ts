@@ -135,14 +135,10 @@ describe("phone triage, end to end", () => {
     await signIn.open();
     await signIn.signIn("tech@rootbench.test");
     await page.getByTestId("home-tech").waitFor();
-    const form = new TriageNewPage(page);
-    await form.open();
-    await form.fill({
-      callerName: "Ines Varda", phone: "+00 555 0199 4412", email: "", family: "Orvanta Tessel Gen 2",
-      serial: "", ridingUse: "road", symptom: "Pedals slip or no drive", words: "slips under load",
+    await new TriageNewPage(page).startCall({
+      callerName: "Ines Varda", phone: "+00 555 0199 4412", family: "Orvanta Tessel Gen 2",
+      ridingUse: "road", symptom: "Pedals slip or no drive", words: "slips under load",
     });
-    await form.start();
-    await page.waitForURL(/\/triage\/\d+$/);
     const walk = new TriageWalkPage(page);
     await walk.ready();
     await walk.waitForQuestion("q-what");
