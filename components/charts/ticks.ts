@@ -1,3 +1,11 @@
+import { pct } from "@/lib/format";
+
+/** A value on a chart's 0–100 percent scale, written with the shared formatter ("12.5 %"). */
+export const percentValue = (v: number, digits = 1) => pct(v / 100, digits);
+
+/** A percent-scale axis tick ("20 %"); visx hands ticks over as its scale's input type. */
+export const percentTick = (v: unknown) => percentValue(Number(v), 0);
+
 /** At most `most` of the labels, evenly spaced and always including the first, so month labels never overlap. */
 export function spacedLabels<T>(labels: T[], most: number): T[] {
   const step = Math.max(1, Math.ceil(labels.length / Math.max(1, most)));

@@ -3,7 +3,7 @@ import { Bar, LinePath } from "@visx/shape";
 import { BottomAxis, Gridlines, LeftAxis } from "@/components/charts/axes";
 import { COPPER, INK } from "@/components/charts/colors";
 import { ChartFrame, plotArea } from "@/components/charts/frame";
-import { pct } from "@/lib/format";
+import { percentTick, percentValue } from "@/components/charts/ticks";
 
 export interface CalibrationPoint {
   bin: string;
@@ -12,8 +12,6 @@ export interface CalibrationPoint {
   observed: number;
 }
 
-/** The chart's values are in percent; the shared formatter takes shares. */
-const pc = (v: number) => pct(v / 100);
 
 /** Per bin of the top probability: how often the top cause was confirmed (bars) against what the tree said (line). */
 export function CalibrationChart({ points }: { points: CalibrationPoint[] }) {
@@ -27,11 +25,11 @@ export function CalibrationChart({ points }: { points: CalibrationPoint[] }) {
       <Gridlines scale={y} plot={plot} />
       {points.map((p) => (
         <Bar key={p.bin} x={x(p.bin)} y={y(p.observed)} width={x.bandwidth()} height={plot.innerHeight - y(p.observed)} fill={COPPER}>
-          <title>{`Top probability ${p.bin} (n = ${p.n}): confirmed ${pc(p.observed)}, the tree gave ${pc(p.predicted)}`}</title>
+          <title>{`Top probability ${p.bin} (n = ${p.n}): confirmed ${percentValue(p.observed)}, the tree gave ${percentValue(p.predicted)}`}</title>
         </Bar>
       ))}
       <LinePath data={points} x={centre} y={(p) => y(p.predicted)} fill="none" stroke={INK} strokeWidth={2} strokeDasharray="5 3" />
-      <LeftAxis scale={y} plot={plot} format={(v) => pct(Number(v) / 100, 0)} />
+      <LeftAxis scale={y} plot={plot} format={percentTick} />
       <BottomAxis scale={x} plot={plot} />
     </ChartFrame>
   );

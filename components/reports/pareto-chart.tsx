@@ -4,7 +4,7 @@ import { Bar, LinePath } from "@visx/shape";
 import { BottomAxis, Gridlines, LeftAxis, RightAxis } from "@/components/charts/axes";
 import { COPPER, INK } from "@/components/charts/colors";
 import { ChartFrame, plotArea } from "@/components/charts/frame";
-import { pct } from "@/lib/format";
+import { percentTick, percentValue } from "@/components/charts/ticks";
 
 export interface ParetoPoint {
   rank: number;
@@ -19,8 +19,6 @@ export interface ParetoPoint {
 /** The 95 % interval as one path: the upright from `low` to `high` and a 4-unit cap at each end. */
 const whisker = (x: number, low: number, high: number) => `M${x},${low}V${high}M${x - 2},${high}H${x + 2}M${x - 2},${low}H${x + 2}`;
 const short = (s: string) => (s.length > 22 ? `${s.slice(0, 21)}…` : s);
-/** The chart's values are in percent; the shared formatter takes shares. */
-const pc = (v: number) => pct(v / 100);
 
 /** Share of closed cases per cause with its interval (bars, left axis), and the cumulative share (line, right axis). */
 export function ParetoChart({ points }: { points: ParetoPoint[] }) {
@@ -36,15 +34,15 @@ export function ParetoChart({ points }: { points: ParetoPoint[] }) {
       <Gridlines scale={share} plot={plot} />
       {points.map((p) => (
         <g key={p.rank}>
-          <title>{`${p.name}: ${pc(p.share)} of cases (n = ${p.n}), 95 % interval ${pc(p.share - p.error[0])}–${pc(p.share + p.error[1])}; cumulative ${pc(p.cumulative)}`}</title>
+          <title>{`${p.name}: ${percentValue(p.share)} of cases (n = ${p.n}), 95 % interval ${percentValue(p.share - p.error[0])}–${percentValue(p.share + p.error[1])}; cumulative ${percentValue(p.cumulative)}`}</title>
           <Bar x={x(p.rank)} y={share(p.share)} width={x.bandwidth()} height={plot.innerHeight - share(p.share)} fill={COPPER} />
           <path className="whisker" d={whisker(centre(p), share(p.share - p.error[0]), share(p.share + p.error[1]))} fill="none" stroke={INK} shapeRendering="crispEdges" />
         </g>
       ))}
       <LinePath data={points} x={centre} y={(p) => cumulative(p.cumulative)} curve={curveMonotoneX} fill="none" stroke={INK} strokeWidth={2} />
       {points.map((p) => <circle key={p.rank} cx={centre(p)} cy={cumulative(p.cumulative)} r={2} fill={INK} />)}
-      <LeftAxis scale={share} plot={plot} format={(v) => pct(Number(v) / 100, 0)} />
-      <RightAxis scale={cumulative} plot={plot} format={(v) => pct(Number(v) / 100, 0)} />
+      <LeftAxis scale={share} plot={plot} format={percentTick} />
+      <RightAxis scale={cumulative} plot={plot} format={percentTick} />
       <BottomAxis scale={x} plot={plot} angle={-35} format={(rank) => short(nameOf.get(rank) ?? "")} />
     </ChartFrame>
   );

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { spacedLabels, wholeTicks } from "@/components/charts/ticks";
+import { percentTick, percentValue, spacedLabels, wholeTicks } from "@/components/charts/ticks";
+import { pct } from "@/lib/format";
 
 describe("spacedLabels", () => {
   it("keeps every label when they fit", () => {
@@ -26,5 +27,14 @@ describe("wholeTicks", () => {
   });
   it("gives an axis from 0 to 1 when every count is zero", () => {
     expect(wholeTicks(0)).toEqual([0, 1]);
+  });
+});
+
+describe("percent-scale values", () => {
+  it("write a 0–100 value as the shared formatter writes the share", () => {
+    expect(percentValue(12.5)).toBe(pct(0.125));
+    expect(percentValue(40, 0)).toBe(pct(0.4, 0));
+    expect(percentTick(20)).toBe(pct(0.2, 0));
+    expect(percentTick(20)).not.toContain(".");
   });
 });
