@@ -1,5 +1,5 @@
 "use client";
-import { startTransition, useMemo, useOptimistic, useState, useTransition } from "react";
+import { useMemo, useState } from "react";
 import { answerStep, undoStep } from "@/app/(shop)/triage/actions";
 import { Panel } from "@/components/ui/panel";
 import { rideAdvice } from "@/lib/triage/safety";
@@ -15,14 +15,13 @@ import { QuestionCard } from "./question-card";
 import { StopRidingBanner } from "./stop-riding-banner";
 import type { WalkProps } from "@/lib/triage/walk-types";
 import { useAnswerKeys } from "./use-answer-keys";
-import { currentRanking, optimisticWalk, type WalkState } from "./walk-state";
+import { useStepRequests } from "./use-step-requests";
+import { currentRanking, type WalkState } from "./walk-state";
 import { WalkHeader } from "./walk-header";
 
-export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }: WalkProps) {
-  const [base, setBase] = useState<WalkState>({ steps, startRanking });
-  const reducer = useMemo(() => optimisticWalk(tree.dx, settings), [tree.dx, settings]);
-  const [state, change] = useOptimistic(base, reducer);
-  const [pending, startAction] = useTransition();
+export function WalkScreen({ kase, tree, causes, steps, startRanking }: WalkProps) {
+  const [state, setState] = useState<WalkState>({ steps, startRanking });
+  const requests = useStepRequests();
   const [error, setError] = useState<string | null>(null);
   const [focus, setFocus] = useState<string | null>(null);
   const [skipped, setSkipped] = useState<ReadonlySet<string>>(new Set());
@@ -50,52 +49,45 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
   const advice = rideAdvice(ranking, (slug) => causeBySlug.get(slug)?.area, cautions);
   const cautionNodes = walk.cautions.map((k) => nodeByKey.get(k)).filter((n): n is ViewNode => !!n);
 
+  const notSaved = (outcome: Error | { error?: string } | null, fallback: string) =>
+    outcome instanceof Error ? `${fallback} The server could not be reached; try again.` : outcome?.error ?? fallback;
+
   function answer(option: ViewOption) {
-    if (pending || !current) return;
-    setError(null);
-    startAction(async () => {
-      change({ type: "answer", nodeKey: current.key, optionKey: option.key });
-      const form = new FormData();
-      form.set("caseId", String(kase.id));
-      form.set("nodeId", String(current.id));
-      form.set("optionId", String(option.id));
-      const result = await answerStep(null, form);
-      // React's startTransition, not the hook's: the hook's would set pending again, an extra
-      // render of the whole screen before this one. This update joins the running action, so the
-      // confirmed step, pending and the optimistic state all change in one render.
-      startTransition(() => {
-        if (result?.ok) {
-          const { step, ranking: confirmed } = result.data;
-          setBase((b) => ({ ...b, steps: [...b.steps, { id: step.id, seq: step.seq, nodeKey: step.nodeKey, optionKey: step.optionKey, ranking: confirmed }] }));
-          setFocus(null);
-        } else {
-          setError(result?.error ?? "The answer was not saved.");
-        }
-      });
+    if (!current) return;
+    const form = new FormData();
+    form.set("caseId", String(kase.id));
+    form.set("nodeId", String(current.id));
+    form.set("optionId", String(option.id));
+    requests.send(() => answerStep(null, form), (result) => {
+      if (!(result instanceof Error) && result?.ok) {
+        const { step, ranking: confirmed } = result.data;
+        setState((s) => ({ ...s, steps: [...s.steps, { id: step.id, seq: step.seq, nodeKey: step.nodeKey, optionKey: step.optionKey, ranking: confirmed }] }));
+        setFocus(null);
+        setError(null);
+      } else {
+        setError(notSaved(result, "The answer was not saved."));
+      }
     });
   }
 
   function undo() {
-    const last = base.steps.at(-1);
-    if (pending || !last) return;
-    setError(null);
-    startAction(async () => {
-      change({ type: "undo" });
-      const form = new FormData();
-      form.set("caseId", String(kase.id));
-      form.set("seq", String(last.seq));
-      const result = await undoStep(null, form);
-      startTransition(() => {
-        if (result?.ok) {
-          setBase((b) => {
-            const remaining = b.steps.filter((s) => s.seq < result.data.removedSeq);
-            return { steps: remaining, startRanking: remaining.length ? b.startRanking : result.data.ranking };
-          });
-          setFocus(null);
-        } else {
-          setError(result?.error ?? "The answer was not taken back.");
-        }
-      });
+    const last = state.steps.at(-1);
+    if (!last) return;
+    const form = new FormData();
+    form.set("caseId", String(kase.id));
+    form.set("seq", String(last.seq));
+    requests.send(() => undoStep(null, form), (result) => {
+      if (!(result instanceof Error) && result?.ok) {
+        const removed = result.data.removedSeq;
+        setState((s) => {
+          const remaining = s.steps.filter((step) => step.seq < removed);
+          return { steps: remaining, startRanking: remaining.length ? s.startRanking : result.data.ranking };
+        });
+        setFocus(null);
+        setError(null);
+      } else {
+        setError(notSaved(result, "The answer was not taken back."));
+      }
     });
   }
 
@@ -112,7 +104,7 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
   });
 
   return (
-    <div className="touch-targets flex flex-col gap-5" data-testid="walk-screen" data-pending={pending ? "yes" : "no"}>
+    <div className="touch-targets flex flex-col gap-5" data-testid="walk-screen" data-pending={requests.saving ? "yes" : "no"}>
       <WalkHeader kase={kase} />
       <StopRidingBanner advice={advice} />
       {error ? <p role="alert" data-testid="walk-error" className="rounded-md bg-danger-light p-3 text-danger">{error}</p> : null}
@@ -120,21 +112,21 @@ export function WalkScreen({ kase, tree, causes, settings, steps, startRanking }
         <div className="flex flex-col gap-5">
           <CautionNotes cautions={cautionNodes} />
           {current ? (
-            <QuestionCard node={current} options={currentOptions} disabled={pending} jumped={!!focus && focus === current.key}
+            <QuestionCard node={current} options={currentOptions} disabled={requests.saving} jumped={!!focus && focus === current.key}
               onAnswer={answer} onSkip={hasDontKnow ? null : skip} />
           ) : (
             <PathEnd reached={walk.reachedCauseIds.map(nameOf)} skipped={skipped.size} onUnskip={() => setSkipped(new Set())} />
           )}
           <Panel title="Answers so far">
-            <AnswerTrail steps={state.steps} titleOf={titleOf} labelOf={labelOf} onUndo={undo} disabled={pending || base.steps.length === 0} />
+            <AnswerTrail steps={state.steps} titleOf={titleOf} labelOf={labelOf} onUndo={undo} disabled={requests.saving || state.steps.length === 0} saving={requests.saving} />
           </Panel>
           <Panel title="Notes"><NotesBox caseId={kase.id} initial={kase.notes} /></Panel>
         </div>
         <CausePanel ranking={ranking} currentKey={currentKey} nameOf={nameOf} titleOf={titleOf} labelOf={labelOf}
-          onPick={(key) => { setFocus(key); setSkipped((s) => { const next = new Set(s); next.delete(key); return next; }); }} disabled={pending} />
+          onPick={(key) => { setFocus(key); setSkipped((s) => { const next = new Set(s); next.delete(key); return next; }); }} disabled={requests.saving} />
       </div>
       <Panel title="Finish the call">
-        <FinishPanel caseId={kase.id} ranking={ranking} catalogue={causes} email={kase.email} disabled={pending} />
+        <FinishPanel caseId={kase.id} ranking={ranking} catalogue={causes} email={kase.email} disabled={requests.saving} />
       </Panel>
     </div>
   );

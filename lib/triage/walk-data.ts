@@ -34,7 +34,6 @@ export async function loadWalk(caseId: number): Promise<{ status: string; props:
       causes: [...catalogue.values()].map((c) => ({
         slug: c.slug, name: c.name, area: c.area, priceLowCents: c.priceLowCents, priceHighCents: c.priceHighCents, labourMinutes: c.labourMinutes, inspectMinutes: c.inspectMinutes,
       })),
-      settings: ctx.settings,
       steps,
       startRanking,
     },

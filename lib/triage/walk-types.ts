@@ -1,7 +1,7 @@
 import type { CauseArea } from "@/db/schema";
 import type { StoredRanking } from "@/lib/triage/ranking-types";
 import type { ViewNode, ViewOption } from "@/lib/triage/walk-view";
-import type { DxSettings, DxTree } from "@/lib/diagnosis";
+import type { DxTree } from "@/lib/diagnosis";
 
 export interface WalkCause {
   slug: string;
@@ -36,7 +36,7 @@ export interface WalkTree {
 }
 
 export interface WalkStep {
-  /** Database id; negative while the server has not confirmed the step. */
+  /** Database id of the stored step. */
   id: number;
   seq: number;
   nodeKey: string;
@@ -48,7 +48,6 @@ export interface WalkProps {
   kase: WalkCase;
   tree: WalkTree;
   causes: WalkCause[];
-  settings: DxSettings;
   steps: WalkStep[];
   startRanking: StoredRanking;
 }

@@ -1,7 +1,6 @@
 // What a person feels, in headless Chromium against the production build (`npm run bench perceived`):
 //  - triage: a number key pressed on a case of the generated 300-node tree with 30 answers recorded,
-//    until the new ranking is painted: first the screen's own (the engine in the browser), then the
-//    server's (the step stored and confirmed). Beside it, in the same run and interleaved, the floor:
+//    until the server's new ranking is painted (the step stored and its ranking shown). Beside it, in the same run and interleaved, the floor:
 //    a key that only makes a round trip behind the same session check (GET /api/session) and paints
 //    its answer. Measured alone, then under load.
 //  - "Under load" is a shop of 50 technicians on the phone (BENCH_LOAD_WALKERS), each answering
@@ -42,21 +41,14 @@ const PAGE_HELPERS = `
 // tsx compiles this file with esbuild's keepNames, whose __name helper the page does not have.
 globalThis.__name = (f) => f;
 // Armed first, awaited after the key is pressed: window.__rbArm(...); press; await window.__rbPending.
-window.__rbArm = (key, done, marks) => { window.__rbPending = window.__rbTime(key, done, marks); window.__rbPending.catch(() => {}); };
-window.__rbTime = (key, done, marks) => new Promise((resolve, reject) => {
+window.__rbArm = (key, done) => { window.__rbPending = window.__rbTime(key, done); window.__rbPending.catch(() => {}); };
+window.__rbTime = (key, done) => new Promise((resolve, reject) => {
   let t0 = 0;
-  const seen = {};
   const check = () => {
     if (!t0) return;
-    for (const [name, test] of Object.entries(marks || {})) if (!(name in seen) && test()) seen[name] = performance.now();
     if (done()) {
       observer.disconnect();
-      requestAnimationFrame(() => setTimeout(() => {
-        const t1 = performance.now();
-        const out = { total: t1 - t0 };
-        for (const [name, at] of Object.entries(seen)) out[name] = at - t0;
-        resolve(out);
-      }, 0));
+      requestAnimationFrame(() => setTimeout(() => resolve({ total: performance.now() - t0 }), 0));
     }
   };
   const observer = new MutationObserver(check);
@@ -75,8 +67,8 @@ window.addEventListener("keydown", async (e) => {
 });
 `;
 
-type Timing = { total: number; optimistic?: number };
-type Arm = (key: string, done: () => boolean, marks?: Record<string, () => boolean>) => void;
+type Timing = { total: number };
+type Arm = (key: string, done: () => boolean) => void;
 const pending = (page: Page) => page.evaluate(() => (window as unknown as { __rbPending: Promise<Timing> }).__rbPending);
 
 async function timeAnswer(page: Page): Promise<Timing> {
@@ -85,9 +77,8 @@ async function timeAnswer(page: Page): Promise<Timing> {
   if (!(await page.getByTestId("current-question").count())) await page.getByTestId("suggestion").first().click();
   await page.getByTestId("current-question").waitFor();
   await page.evaluate((n) => (window as unknown as { __rbArm: Arm }).__rbArm("1",
-    () => document.querySelector(`[data-testid=trail-step][data-seq="${n}"][data-confirmed=yes]`) !== null
-      && document.querySelector("[data-testid=walk-screen]")?.getAttribute("data-pending") === "no",
-    { optimistic: () => document.querySelector(`[data-testid=trail-step][data-seq="${n}"]`) !== null }), n);
+    () => document.querySelector(`[data-testid=trail-step][data-seq="${n}"]`) !== null
+      && document.querySelector("[data-testid=walk-screen]")?.getAttribute("data-pending") === "no"), n);
   await page.keyboard.press("1");
   const result = await pending(page);
   // Back to 30 answers for the next sample (not timed).
@@ -191,7 +182,6 @@ async function measureAllTriage(page: Page, caseId: number, techId: string) {
 
   console.log(`\nperceived speed, Chromium against the production build; ${STEPS} answers recorded on a 300-node tree; ${SAMPLES} samples each; load average ${load}`);
   console.log(`${"".padEnd(44)}${"median".padStart(8)}${"p95".padStart(9)}${"n".padStart(6)}   (ms, keydown to the frame painted)`);
-  console.log(row("answer: ranking painted, screen's own", alone.answer.map((t) => t.optimistic ?? t.total)));
   console.log(row("answer: server's ranking painted", alone.answer.map((t) => t.total), 50));
   console.log(row("floor: no-op round trip, same session check", alone.floor.map((t) => t.total)));
   if (ONLY === "answer") return;
@@ -201,7 +191,6 @@ async function measureAllTriage(page: Page, caseId: number, techId: string) {
 
   const loadRows = (name: string, think: ThinkTime, run: typeof shop, budget?: number) => {
     console.log(`${name}: ${LOAD_WALKERS} technicians each thinking ${seconds(think.min)}–${seconds(think.max)} s before an answer`);
-    console.log(row(`  screen's own`, run.answer.map((t) => t.optimistic ?? t.total)));
     console.log(row(`  server's ranking painted`, run.answer.map((t) => t.total), budget));
     console.log(row(`  floor`, run.floor.map((t) => t.total)));
     console.log(`    background: ${run.background.ok} answers stored (${run.background.failed} failed ${JSON.stringify(run.background.errors)}), ` +

