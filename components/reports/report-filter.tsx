@@ -3,11 +3,12 @@ import { FamilySelect } from "./family-select";
 import { filterQuery, PRESET_MONTHS, type ReportFilter } from "@/lib/reports/period";
 
 /** Period presets as links, the family and a custom range as plain GET forms: the report lives in its URL. */
-export function ReportFilterBar({ filter, families, exportHref, importHref }: {
+export function ReportFilterBar({ path, filter, families, exportHref }: {
+  /** The reports page the links and forms lead back to. */
+  path: string;
   filter: ReportFilter;
   families: { slug: string; name: string }[];
   exportHref: string | null;
-  importHref: string | null;
 }) {
   const input = "rounded-md border border-ink-faint/50 bg-white px-3 py-2 font-normal text-ink";
   const button = "rounded-md border border-ink-soft px-4 py-2 font-medium text-ink hover:bg-paper-deep";
@@ -20,7 +21,7 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
           return (
             <Link
               key={m}
-              href={`/reports?${filterQuery(filter, { preset: m })}`}
+              href={`${path}?${filterQuery(filter, { preset: m })}`}
               aria-current={active ? "page" : undefined}
               className={`rounded-full border px-3 py-1 text-sm no-underline ${active ? "border-copper bg-copper text-white" : "border-ink-faint/50 text-ink hover:bg-paper-deep"}`}
             >
@@ -30,7 +31,7 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
         })}
       </nav>
       <div className="flex flex-wrap items-end gap-x-6 gap-y-3">
-        <form method="get" action="/reports" aria-label="Motor family" className="flex flex-wrap items-end gap-2">
+        <form method="get" action={path} aria-label="Motor family" className="flex flex-wrap items-end gap-2">
           {filter.period.preset !== null ? <input type="hidden" name="last" value={filter.period.preset} /> : (
             <>
               <input type="hidden" name="from" value={filter.period.fromDay} />
@@ -40,7 +41,8 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
           <FamilySelect value={filter.familySlug} families={families} className={input} />
           <button type="submit" className={button}>Show</button>
         </form>
-        <form method="get" action="/reports" aria-label="Custom period" className="flex flex-wrap items-end gap-2">
+        {/* Keyed by the period: a preset link navigates in place, and the date fields must show its dates, not the ones typed before. */}
+        <form key={`${filter.period.fromDay}/${filter.period.toDay}`} method="get" action={path} aria-label="Custom period" className="flex flex-wrap items-end gap-2">
           {filter.familySlug ? <input type="hidden" name="family" value={filter.familySlug} /> : null}
           <label className="flex flex-col gap-1 text-sm font-medium text-ink-soft">
             From
@@ -52,14 +54,11 @@ export function ReportFilterBar({ filter, families, exportHref, importHref }: {
           </label>
           <button type="submit" className={button}>Show period</button>
         </form>
-        <div className="ml-auto flex flex-wrap gap-3">
-          {exportHref ? (
-            <a href={exportHref} download className="rounded-md bg-copper px-4 py-2 font-medium text-white no-underline shadow-sm hover:bg-copper-dark" data-testid="export-csv">
-              Export cases as CSV
-            </a>
-          ) : null}
-          {importHref ? <Link href={importHref} className="rounded-md border border-copper px-4 py-2 font-medium text-copper-dark no-underline hover:bg-copper-light">Import past records</Link> : null}
-        </div>
+        {exportHref ? (
+          <a href={exportHref} download className="ml-auto rounded-md bg-copper px-4 py-2 font-medium text-white no-underline shadow-sm hover:bg-copper-dark" data-testid="export-csv">
+            Export cases as CSV
+          </a>
+        ) : null}
       </div>
     </div>
   );

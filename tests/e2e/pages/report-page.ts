@@ -9,6 +9,13 @@ export class ReportPage {
     await this.page.getByTestId("reports-page").waitFor();
   }
 
+  /** Follows a link in the reports' row of pages. */
+  async goTo(label: "Causes" | "Tree accuracy" | "Parts and labour" | "Does the repair last?"): Promise<void> {
+    await this.page.getByRole("navigation", { name: "Reports" }).getByRole("link", { name: label, exact: true }).click();
+    await this.page.waitForFunction((l) => document.querySelector('nav[aria-label="Reports"] [aria-current=page]')?.textContent === l, label);
+    await this.page.locator("main h1").waitFor();
+  }
+
   scope() {
     return this.page.getByTestId("report-scope");
   }

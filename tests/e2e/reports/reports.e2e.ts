@@ -28,8 +28,6 @@ describe("the shop lead's reports", () => {
     // The charts arrive drawn with the page: the Pareto chart has a bar per charted cause (at most 15).
     const pareto = browser.page.getByRole("img", { name: /Pareto chart of confirmed causes/ });
     expect(await pareto.locator("rect.visx-bar").count()).toBe(Math.min(15, await reports.paretoRows().count()));
-    await browser.page.getByTestId("accuracy-table").waitFor();
-    await browser.page.getByTestId("calibration-table").waitFor();
     await screenshot(browser.page, "reports-last-12-months");
 
     await reports.choosePreset(24);
@@ -42,6 +40,33 @@ describe("the shop lead's reports", () => {
     expect(await reports.scope().textContent()).toMatch(/Orvanta Tessel Gen 2/);
     expect(await reports.paretoRows().count()).toBeLessThanOrEqual(allFamilies);
     await screenshot(browser.page, "reports-24-months-one-family");
+  });
+
+  it("the other report pages keep the period and family chosen", async () => {
+    const reports = new ReportPage(browser.page);
+    const scope = await reports.scope().textContent();
+    await reports.goTo("Tree accuracy");
+    expect(browser.page.url()).toMatch(/\/reports\/trees\?.*last=24.*family=orvanta-tessel-2/);
+    expect(await reports.scope().textContent()).toBe(scope);
+    await browser.page.getByTestId("accuracy-table").waitFor();
+    await browser.page.getByTestId("calibration-table").waitFor();
+    await screenshot(browser.page, "reports-tree-accuracy");
+
+    await reports.goTo("Parts and labour");
+    expect(await reports.scope().textContent()).toBe(scope);
+    expect(await browser.page.getByRole("img", { name: /Parts replaced per month/ }).count()).toBe(1);
+    // The period presets stay on this page, and the custom period's fields follow the preset.
+    const customFrom = browser.page.getByRole("form", { name: "Custom period" }).getByLabel("From");
+    const from24 = await customFrom.inputValue();
+    await reports.choosePreset(6);
+    expect(new URL(browser.page.url()).pathname).toBe("/reports/parts");
+    expect(browser.page.url()).toContain("family=orvanta-tessel-2");
+    expect(await customFrom.inputValue() > from24).toBe(true); // ISO dates sort as text
+    await screenshot(browser.page, "reports-parts");
+
+    await reports.goTo("Causes");
+    expect(new URL(browser.page.url()).pathname).toBe("/reports");
+    expect(browser.page.url()).toContain("last=6");
   });
 
   it("exports the same cases as CSV for a spreadsheet", async () => {

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { ReportsNav } from "@/components/reports/reports-nav";
 import { ComparisonCard } from "@/components/survival/comparison-card";
 import { SurvivalFilterBar } from "@/components/survival/survival-filter";
 import { WarrantyForm } from "@/components/survival/warranty-form";
@@ -23,8 +23,8 @@ export default async function LastingPage({ searchParams }: { searchParams: Prom
 
   return (
     <div className="flex flex-col gap-6" data-testid="lasting-page">
+      <ReportsNav current="lasting" query="" may={(capability) => may(user.role, capability)} />
       <div>
-        <p className="text-sm"><Link href="/reports">Shop reports</Link></p>
         <h1>Does the repair last?</h1>
         <p className="text-ink-soft" data-testid="lasting-scope">
           Repairs closed from {formatDay(report.from)} to today, {report.familyName ?? "all motor families"}, {report.filter.ridingUse ? `${report.filter.ridingUse} riding` : "all riding uses"}.
