@@ -18,7 +18,7 @@ export const REPORT_PAGES: ReportPageLink[] = [
   { key: "trees", label: "Tree accuracy", path: "/reports/trees", filtered: true, capability: "reports:read" },
   { key: "parts", label: "Parts and labour", path: "/reports/parts", filtered: true, capability: "reports:read" },
   { key: "lasting", label: "Does the repair last?", path: "/reports/lasting", filtered: false, capability: "reports:read" },
-  { key: "import", label: "Import past records", path: "/reports/import", filtered: false, capability: "reports:import" },
+  { key: "import", label: "Import past repairs", path: "/reports/import", filtered: false, capability: "reports:import" },
 ];
 
 export const reportPath = (key: ReportPageKey) => REPORT_PAGES.find((p) => p.key === key)!.path;
