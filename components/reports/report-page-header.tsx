@@ -18,7 +18,7 @@ export function ReportPageHeader({ current, title, scope, families, role }: {
   const query = filterQuery(filter);
   return (
     <>
-      <ReportsNav current={current} query={query} may={(capability) => may(role, capability)} />
+      <ReportsNav current={current} query={query} role={role} />
       <div>
         <h1>{title}</h1>
         <p className="text-ink-soft" data-testid="report-scope">

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { Capability } from "@/lib/auth/roles";
+import { may, type Capability, type Role } from "@/lib/auth/roles";
 
 export type ReportPageKey = "causes" | "trees" | "parts" | "lasting" | "import";
 
@@ -24,10 +24,10 @@ export const REPORT_PAGES: ReportPageLink[] = [
 export const reportPath = (key: ReportPageKey) => REPORT_PAGES.find((p) => p.key === key)!.path;
 
 /** The row of report pages above each one; `query` is the current period and family filter. */
-export function ReportsNav({ current, query, may }: { current: ReportPageKey; query: string; may: (capability: Capability) => boolean }) {
+export function ReportsNav({ current, query, role }: { current: ReportPageKey; query: string; role: Role }) {
   return (
     <nav aria-label="Reports" className="flex flex-wrap gap-x-1 gap-y-2 border-b border-ink-faint/40">
-      {REPORT_PAGES.filter((page) => may(page.capability)).map((page) => {
+      {REPORT_PAGES.filter((page) => may(role, page.capability)).map((page) => {
         const active = page.key === current;
         return (
           <Link key={page.key} href={page.filtered && query ? `${page.path}?${query}` : page.path} aria-current={active ? "page" : undefined}

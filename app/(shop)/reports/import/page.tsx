@@ -4,7 +4,6 @@ import { ImportColumns } from "@/components/reports/import-columns";
 import { ImportPanel } from "@/components/reports/import-panel";
 import { Panel } from "@/components/ui/panel";
 import { requireRole } from "@/lib/auth/require-role";
-import { may } from "@/lib/auth/roles";
 
 export const metadata: Metadata = { title: "Import past repairs" };
 
@@ -12,7 +11,7 @@ export default async function ImportPage() {
   const user = await requireRole("reports:import", "/reports/import");
   return (
     <div className="flex flex-col gap-6">
-      <ReportsNav current="import" query="" may={(capability) => may(user.role, capability)} />
+      <ReportsNav current="import" query="" role={user.role} />
       <div>
         <h1>Import past repairs</h1>
         <p className="text-ink-soft">Bring the repair history from a spreadsheet into Rootbench. The file is checked first; nothing is written until you confirm.</p>

@@ -23,7 +23,7 @@ export default async function LastingPage({ searchParams }: { searchParams: Prom
 
   return (
     <div className="flex flex-col gap-6" data-testid="lasting-page">
-      <ReportsNav current="lasting" query="" may={(capability) => may(user.role, capability)} />
+      <ReportsNav current="lasting" query="" role={user.role} />
       <div>
         <h1>Does the repair last?</h1>
         <p className="text-ink-soft" data-testid="lasting-scope">
